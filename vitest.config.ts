@@ -1,0 +1,39 @@
+import { defineConfig } from 'vitest/config'
+
+// Three projects: `unit` is pure and needs nothing running; `api` and `e2e` talk to the built
+// server that tests/setup/server.ts starts against the throwaway services of scripts/test.mjs.
+export default defineConfig({
+  test: {
+    projects: [
+      {
+        test: {
+          name: 'unit',
+          include: ['tests/unit/**/*.test.ts'],
+          environment: 'node',
+        },
+      },
+      {
+        test: {
+          name: 'api',
+          include: ['tests/api/**/*.test.ts'],
+          environment: 'node',
+          globalSetup: ['tests/setup/server.ts'],
+          fileParallelism: false,
+          testTimeout: 30_000,
+          hookTimeout: 60_000,
+        },
+      },
+      {
+        test: {
+          name: 'e2e',
+          include: ['tests/e2e/**/*.test.ts'],
+          environment: 'node',
+          globalSetup: ['tests/setup/server.ts'],
+          fileParallelism: false,
+          testTimeout: 60_000,
+          hookTimeout: 90_000,
+        },
+      },
+    ],
+  },
+})
