@@ -1,7 +1,8 @@
 import { defineConfig } from 'vitest/config'
 
-// Three projects: `unit` is pure and needs nothing running; `api` and `e2e` talk to the built
-// server that tests/setup/server.ts starts against the throwaway services of scripts/test.mjs.
+// Three projects. `unit` is pure and needs nothing running. `api` and `e2e` talk to the built
+// server that scripts/test.mjs starts against its own throwaway PostgreSQL, object store and
+// SMTP fake, and hands over in IONFOLIO_TEST_* environment variables.
 export default defineConfig({
   test: {
     projects: [
@@ -17,7 +18,6 @@ export default defineConfig({
           name: 'api',
           include: ['tests/api/**/*.test.ts'],
           environment: 'node',
-          globalSetup: ['tests/setup/server.ts'],
           fileParallelism: false,
           testTimeout: 30_000,
           hookTimeout: 60_000,
@@ -28,7 +28,6 @@ export default defineConfig({
           name: 'e2e',
           include: ['tests/e2e/**/*.test.ts'],
           environment: 'node',
-          globalSetup: ['tests/setup/server.ts'],
           fileParallelism: false,
           testTimeout: 60_000,
           hookTimeout: 90_000,
