@@ -1,0 +1,41 @@
+/**
+ * The central-field self-consistent-field atom solver: public entry.
+ *
+ * Method ('lsd-sic-spherical'): non-relativistic Kohn–Sham central field with local spin-density
+ * exchange–correlation (Slater exchange, Vosko–Wilk–Nusair correlation; xc.ts) and the Perdew–Zunger
+ * self-interaction correction orbital by orbital in the spherical approximation (sic.ts), Hund's-rule
+ * spin occupations (channels.ts), a logarithmic radial grid (grid.ts), Numerov shooting with node
+ * counting (radial.ts) and Anderson density mixing (mixing.ts). The correction gives every orbital the
+ * −(Z − N + 1)/r tail of a neutral atom or ion and makes one-electron ions exact.
+ *
+ * Everything here is a pure function of its arguments: no module state, no I/O, results are plain
+ * JSON (a failed solve has totalEnergyHartree NaN, which JSON writes as null, and a failure reason).
+ */
+import type { SubshellOccupation } from './channels'
+import { METHOD_NAMES, type ScfOptions } from './options'
+import { toResult } from './result'
+import { runScf } from './scf'
+import { speciesEstimates, type ConfigurationSource } from './species'
+import type { ScfResult, ScfSpeciesEstimates } from './types'
+
+export type { ScfOrbital, ScfRadialDensity, ScfResult, ScfSpeciesEstimates } from './types'
+export type { ScfFunctional, ScfOptions } from './options'
+export type { ConfigurationSource } from './species'
+export { HARTREE_EV } from './species'
+
+/** The production method's name as shown to users. */
+export const SCF_METHOD: string = METHOD_NAMES['lsd-sic']
+
+/** Solve one electron configuration of element z (charge = z − electrons); throws RangeError on an impossible configuration. */
+export function solveConfiguration(z: number, subshells: SubshellOccupation[], options: ScfOptions = {}): ScfResult {
+  return toResult(runScf(z, subshells, options), options.densityPoints ?? 80)
+}
+
+/** ΔSCF (E(next ion) − E(species)) and eigenvalue ionisation energies of (z, charge), configurations from configurationOf. */
+export function solveSpeciesScf(
+  z: number,
+  charge: number,
+  options: ScfOptions & { configurationOf: ConfigurationSource },
+): ScfSpeciesEstimates {
+  return speciesEstimates(z, charge, options.configurationOf, options)
+}

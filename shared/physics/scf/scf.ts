@@ -1,0 +1,240 @@
+/**
+ * The self-consistency loop: potentials from the input orbital densities, orbitals in those
+ * potentials, Anderson mixing of the orbital densities, until input and output agree.
+ */
+import { buildChannels, checkSubshells, type Channel, type SubshellOccupation } from './channels'
+import { makeLogGrid, type RadialGrid } from './grid'
+import { andersonMixer } from './mixing'
+import { METHOD_NAMES, type ScfFunctional, type ScfOptions } from './options'
+import { hartree, hartreeWorkspace, startingPotential } from './potential'
+import { radialWorkspace, solveBoundState } from './radial'
+import { selfInteraction, sicWorkspace } from './sic'
+import { lsdOnGrid } from './xc'
+
+/** One converged channel: its eigenvalue and radial function P (∫P² dr = 1). */
+export interface ChannelSolution {
+  channel: Channel
+  energy: number
+  p: Float64Array
+}
+
+/** Everything the loop knows at the end; result.ts turns it into the public ScfResult. */
+export interface ScfRun {
+  method: string
+  z: number
+  charge: number
+  converged: boolean
+  iterations: number
+  totalEnergy: number
+  failure?: string
+  grid: RadialGrid
+  solutions: ChannelSolution[]
+}
+
+const MIX_BETA = 0.6
+const MIX_DEPTH = 5
+
+/**
+ * Outer grid radius, bohr: far enough that the outermost orbital (hydrogen-like size n²/(q + 1)
+ * for an ion of charge q) has decayed by many e-folds, never more than 60 bohr.
+ */
+export function defaultRMax(z: number, subshells: SubshellOccupation[]): number {
+  const electrons = subshells.reduce((s, o) => s + o.electrons, 0)
+  const nMax = subshells.reduce((m, o) => (o.electrons > 0 ? Math.max(m, o.n) : m), 1)
+  const charge = Math.max(0, z - electrons)
+  return Math.min(60, Math.max(20, (40 * nMax * nMax) / (charge + 1)))
+}
+
+/**
+ * Solve one configuration self-consistently (the engine behind solveConfiguration); seed, a run
+ * on the same grid, only supplies the starting densities.
+ */
+export function runScf(z: number, subshells: SubshellOccupation[], options: ScfOptions = {}, seed?: ScfRun): ScfRun {
+  const functional: ScfFunctional = options.functional ?? 'lsd-sic'
+  const occupied = checkSubshells(z, subshells)
+  const channels = buildChannels(occupied, functional)
+  const electrons = occupied.reduce((s, o) => s + o.electrons, 0)
+  const charge = z - electrons
+  const rMax = options.rMax ?? defaultRMax(z, occupied)
+  const grid = makeLogGrid(z, { h: options.gridStep, rMax })
+  const base = { method: METHOD_NAMES[functional], z, charge, grid }
+  if (channels.length === 0) return { ...base, converged: true, iterations: 0, totalEnergy: 0, solutions: [] }
+
+  const maxIterations = options.maxIterations ?? 120
+  const tolerance = (options.tolerance ?? 1e-6) * electrons
+  const size = grid.size
+  const count = channels.length
+  const rws = radialWorkspace(grid)
+  const hws = hartreeWorkspace(grid)
+  const sws = sicWorkspace(grid)
+  const fail = (iterations: number, failure: string, solutions: ChannelSolution[] = []): ScfRun => ({
+    ...base,
+    converged: false,
+    iterations,
+    totalEnergy: Number.NaN,
+    failure,
+    solutions,
+  })
+
+  // Iteration zero: a neighbouring solution (the species, when solving its ion) or, failing that,
+  // orbitals in the Thomas–Fermi potential give the first input densities.
+  const energies = new Float64Array(count)
+  let xIn: Float64Array = new Float64Array(count * size)
+  let v0: Float64Array | null = null
+  for (let c = 0; c < count; c++) {
+    const ch = channels[c]
+    const from = seed && seed.grid.size === size && seed.grid.r[0] === grid.r[0] ? seedFor(ch, seed.solutions) : null
+    let p: Float64Array
+    if (from) {
+      energies[c] = from.energy
+      p = from.p
+    } else {
+      v0 ??= startingPotential(grid, z, electrons)
+      const s = solveBoundState(grid, v0, z, ch.n, ch.l, -0.5 * (z / ch.n) ** 2, rws)
+      if (typeof s === 'string') return fail(0, s)
+      energies[c] = s.energy
+      p = s.p
+    }
+    for (let i = 0; i < size; i++) xIn[c * size + i] = ch.occupation * p[i] * p[i]
+  }
+
+  const weights = new Float64Array(count * size)
+  for (let c = 0; c < count; c++) weights.set(grid.dr, c * size)
+  const mixer = andersonMixer(weights, MIX_BETA, MIX_DEPTH)
+  const potentials = Array.from({ length: count }, () => new Float64Array(size))
+  const sicEnergy = new Float64Array(count)
+  const pUp = new Float64Array(size)
+  const pDown = new Float64Array(size)
+  const vH = new Float64Array(size)
+  const vxcUp = new Float64Array(size)
+  const vxcDown = new Float64Array(size)
+  const vSic = new Float64Array(size)
+
+  const buildPotentials = (x: Float64Array): { eH: number; eXc: number; eSic: number } => {
+    pUp.fill(0)
+    pDown.fill(0)
+    for (let c = 0; c < count; c++) {
+      const ch = channels[c]
+      const o = c * size
+      for (let i = 0; i < size; i++) {
+        const q = x[o + i]
+        if (ch.spin === 'pair') {
+          pUp[i] += 0.5 * q
+          pDown[i] += 0.5 * q
+        } else if (ch.spin === 'up') pUp[i] += q
+        else pDown[i] += q
+      }
+    }
+    for (let i = 0; i < size; i++) vxcUp[i] = pUp[i] + pDown[i]
+    const eH = hartree(grid, vxcUp, vH, hws)
+    const eXc = lsdOnGrid(grid.r, grid.dr, pUp, pDown, size, vxcUp, vxcDown)
+    let eSic = 0
+    for (let c = 0; c < count; c++) {
+      const ch = channels[c]
+      const v = potentials[c]
+      const vxc = ch.spin === 'down' ? vxcDown : vxcUp
+      for (let i = 0; i < size; i++) v[i] = -z / grid.r[i] + vH[i] + vxc[i]
+      if (functional === 'lsd-sic') {
+        sicEnergy[c] = selfInteraction(grid, x.subarray(c * size, (c + 1) * size), ch.perSpin, ch.spins, vSic, sws, hws)
+        eSic += sicEnergy[c]
+        for (let i = 0; i < size; i++) v[i] -= vSic[i]
+      }
+    }
+    return { eH, eXc, eSic }
+  }
+
+  let solutions: ChannelSolution[] = []
+  let best = Infinity
+  let worse = 0
+  for (let iteration = 1; iteration <= maxIterations; iteration++) {
+    buildPotentials(xIn)
+    const xOut = new Float64Array(count * size)
+    solutions = []
+    for (let c = 0; c < count; c++) {
+      const ch = channels[c]
+    const s = solveBoundState(grid, potentials[c], z, ch.n, ch.l, energies[c], rws)
+      if (typeof s === 'string') return fail(iteration, s)
+      energies[c] = s.energy
+      solutions.push({ channel: ch, energy: s.energy, p: s.p })
+      for (let i = 0; i < size; i++) xOut[c * size + i] = ch.occupation * s.p[i] * s.p[i]
+    }
+    let residual = 0
+    for (let k = 0; k < xOut.length; k++) residual += weights[k] * Math.abs(xOut[k] - xIn[k])
+    if (!Number.isFinite(residual)) return fail(iteration, 'the density became non-finite', solutions)
+    if (residual < tolerance) {
+      const totalEnergy = totalEnergyOf(z, grid, solutions, potentials, xOut, buildPotentials)
+      if (!Number.isFinite(totalEnergy)) return fail(iteration, 'the total energy is not finite', solutions)
+      return { ...base, converged: true, iterations: iteration, totalEnergy, solutions }
+    }
+    // A run of steps that make the residual worse means the history misleads: start it afresh.
+    if (residual < best) {
+      best = residual
+      worse = 0
+    } else if (++worse >= 4) {
+      mixer.reset()
+      worse = 0
+      best = residual
+    }
+    xIn = clipAndNormalise(mixer.next(xIn, xOut), channels, grid)
+    if (iteration === maxIterations)
+      return fail(iteration, `not self-consistent after ${iteration} iterations (residual ${(residual / electrons).toExponential(1)} per electron)`, solutions)
+  }
+  return fail(maxIterations, 'no iterations were allowed', solutions)
+}
+
+/** The seed's orbital for a channel: same subshell and spin, else the same subshell in either spin. */
+function seedFor(ch: Channel, solutions: ChannelSolution[]): ChannelSolution | null {
+  const same = solutions.filter((s) => s.channel.n === ch.n && s.channel.l === ch.l)
+  return same.find((s) => s.channel.spin === ch.spin) ?? same[0] ?? null
+}
+
+/**
+ * Mixed densities can dip below zero where the orbitals have nodes; clip them and restore each
+ * channel's electron count, so the potentials stay real and neutral where they should be.
+ */
+function clipAndNormalise(x: Float64Array, channels: Channel[], grid: RadialGrid): Float64Array {
+  const size = grid.size
+  for (let c = 0; c < channels.length; c++) {
+    const o = c * size
+    let q = 0
+    for (let i = 0; i < size; i++) {
+      if (x[o + i] < 0) x[o + i] = 0
+      q += grid.dr[i] * x[o + i]
+    }
+    const s = q > 0 ? channels[c].occupation / q : 1
+    for (let i = 0; i < size; i++) x[o + i] *= s
+  }
+  return x
+}
+
+/**
+ * E = T_s + E_nuc + E_H + E_xc + E_SIC of the output orbitals, with the kinetic energy of each orbital
+ * from its own eigenvalue, T = ε − ⟨P|v|P⟩ in the potential it was solved in.
+ */
+function totalEnergyOf(
+  z: number,
+  grid: RadialGrid,
+  solutions: ChannelSolution[],
+  potentials: Float64Array[],
+  xOut: Float64Array,
+  build: (x: Float64Array) => { eH: number; eXc: number; eSic: number },
+): number {
+  const size = grid.size
+  let kinetic = 0
+  let nuclear = 0
+  for (let c = 0; c < solutions.length; c++) {
+    const { channel, energy, p } = solutions[c]
+    const v = potentials[c]
+    let pot = 0
+    let nuc = 0
+    for (let i = 0; i < size; i++) {
+      const w = grid.dr[i] * p[i] * p[i]
+      pot += w * v[i]
+      nuc += w / grid.r[i]
+    }
+    kinetic += channel.occupation * (energy - pot)
+    nuclear -= channel.occupation * z * nuc
+  }
+  const { eH, eXc, eSic } = build(xOut)
+  return kinetic + nuclear + eH + eXc + eSic
+}
