@@ -1,0 +1,14 @@
+import type { Capability } from '#shared/auth/roles'
+
+export interface NavItem {
+  to: string
+  label: string
+  capability: Capability | null
+}
+
+/** The main navigation; each entry shows only to roles holding its capability. */
+export const NAVIGATION: NavItem[] = [
+  { to: '/', label: 'Overview', capability: null },
+  { to: '/audit', label: 'Audit trail', capability: 'readAudit' },
+  { to: '/people', label: 'People', capability: 'managePeople' },
+]

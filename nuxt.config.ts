@@ -1,0 +1,67 @@
+// Every setting has a working local default and is overridden at run time by the matching
+// NUXT_* environment variable (e.g. NUXT_DATABASE_URL, NUXT_S3_ENDPOINT, NUXT_SMTP_HOST), so
+// pointing the built server at managed services is configuration only.
+export default defineNuxtConfig({
+  compatibilityDate: '2026-11-01',
+  devtools: { enabled: false },
+  telemetry: false,
+  modules: ['@nuxtjs/tailwindcss', '@pinia/nuxt'],
+  css: [
+    '@fontsource/inter/latin-400.css',
+    '@fontsource/inter/latin-ext-400.css',
+    '@fontsource/inter/latin-600.css',
+    '@fontsource/inter/latin-ext-600.css',
+    '@fontsource/inter/greek-400.css',
+    '@fontsource/roboto-mono/latin-400.css',
+  ],
+  tailwindcss: { cssPath: '~/assets/css/main.css', viewer: false },
+  app: {
+    head: {
+      htmlAttrs: { lang: 'en' },
+      title: 'Ionfolio',
+      meta: [
+        { name: 'viewport', content: 'width=device-width, initial-scale=1' },
+        { name: 'description', content: 'Target samples and ion species for the laboratory' },
+      ],
+      link: [{ rel: 'icon', type: 'image/svg+xml', href: '/favicon.svg' }],
+    },
+  },
+  runtimeConfig: {
+    databaseUrl: 'postgres://postgres@127.0.0.1:55432/ionfolio',
+    databasePoolMax: 10,
+    s3: {
+      endPoint: '127.0.0.1',
+      port: 9300,
+      useSsl: false,
+      accessKey: 'S3RVER',
+      secretKey: 'S3RVER',
+      region: 'us-east-1',
+      bucket: 'ionfolio',
+      pathStyle: true,
+    },
+    smtp: {
+      host: '127.0.0.1',
+      port: 2526,
+      secure: false,
+      user: '',
+      pass: '',
+      from: 'Ionfolio <ionfolio@larchmere-lab.example>',
+    },
+    // Take the client address from X-Forwarded-For: only behind a trusted load balancer.
+    trustProxy: false,
+    // Empty means "decide from publicBaseUrl": Secure cookies whenever the site is served over https.
+    cookieSecure: '',
+    public: {
+      baseUrl: 'http://localhost:3300',
+      labName: 'Larchmere Ion Beam Laboratory',
+    },
+  },
+  nitro: {
+    experimental: { tasks: true },
+  },
+  typescript: {
+    nodeTsConfig: {
+      include: ['../tests/**/*.ts', '../scripts/**/*.ts', '../bench/**/*.ts', '../knex.config.ts', '../migrations/**/*.ts', '../seeds/**/*.ts'],
+    },
+  },
+})

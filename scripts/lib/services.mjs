@@ -1,0 +1,41 @@
+// The three local services together: PostgreSQL, the object-store stand-in and a mail fake,
+// and the NUXT_* environment that points the app (and the seeds) at them.
+import path from 'node:path'
+import { startPostgres, clusterDir } from './postgres.mjs'
+import { startObjectStore } from './objectstore.mjs'
+import { startMailInbox, startMailSpool } from './mail.mjs'
+
+/** Starts all three; `mail` is 'inbox' (demo, web UI) or 'spool' (tests, JSON files). */
+export async function startServices({ storage, ports, database, mail }) {
+  const started = []
+  const stopAll = async () => {
+    for (const s of started.reverse()) await s.stop()
+  }
+  try {
+    const pg = startPostgres({ dir: clusterDir(path.join(storage, 'postgres')), port: ports.postgres })
+    started.push(pg)
+    pg.ensureDatabase(database)
+    const store = await startObjectStore({ port: ports.s3, directory: path.join(storage, 'objects') })
+    started.push(store)
+    const mailer =
+      mail === 'inbox'
+        ? await startMailInbox({ smtpPort: ports.smtp, webPort: ports.mailWeb, directory: path.join(storage, 'mail') })
+        : await startMailSpool({ port: ports.smtp, spool: path.join(storage, 'mail') })
+    started.push(mailer)
+    const env = {
+      NUXT_DATABASE_URL: pg.url(database),
+      NUXT_S3_END_POINT: '127.0.0.1',
+      NUXT_S3_PORT: String(ports.s3),
+      NUXT_S3_USE_SSL: 'false',
+      NUXT_S3_ACCESS_KEY: 'S3RVER',
+      NUXT_S3_SECRET_KEY: 'S3RVER',
+      NUXT_S3_BUCKET: 'ionfolio',
+      NUXT_SMTP_HOST: '127.0.0.1',
+      NUXT_SMTP_PORT: String(ports.smtp),
+    }
+    return { pg, store, mailer, env, stop: stopAll }
+  } catch (e) {
+    await stopAll()
+    throw e
+  }
+}

@@ -1,0 +1,72 @@
+// `npm test`: every test, against services of its own. Starts a throwaway PostgreSQL cluster,
+// object store and SMTP spool under a fresh temporary folder, migrates and seeds it, builds and
+// starts the app, runs vitest (arguments pass through, e.g. `npm test -- --project unit`), then
+// stops it all. The demo's data under storage/ is never touched.
+import { mkdtempSync, chmodSync, rmSync } from 'node:fs'
+import os from 'node:os'
+import path from 'node:path'
+import { ensureNodeModules, ensureDebianTools, ensureBuild, dbTask, ROOT } from './lib/setup.mjs'
+import { freePort, startChild, waitFor } from './lib/proc.mjs'
+
+const args = process.argv.slice(2)
+const unitOnly = args.includes('--project') && args[args.indexOf('--project') + 1] === 'unit' && args.filter((a) => a === '--project').length === 1
+
+ensureNodeModules()
+const runVitest = (extra, env) => startChild(process.execPath, [path.join(ROOT, 'node_modules', 'vitest', 'vitest.mjs'), 'run', ...extra], { cwd: ROOT, env: { ...process.env, ...env }, stdio: 'inherit' }).exited
+
+// The api and e2e projects share one server and database, so the projects run one after another
+// (unit first: it is fastest and needs nothing). Explicit vitest arguments replace the sequence.
+async function vitest(env) {
+  if (args.length) return runVitest(args, env)
+  let worst = 0
+  for (const project of ['unit', 'api', 'e2e']) worst = Math.max(worst, await runVitest(['--project', project], env))
+  return worst
+}
+
+if (unitOnly) process.exit(await runVitest(args, {}))
+
+ensureDebianTools({ '/usr/bin/chromium': 'chromium', '/usr/bin/pdftoppm': 'poppler-utils', '/usr/bin/pdftotext': 'poppler-utils', '/usr/bin/zbarimg': 'zbar-tools' })
+const { startServices } = await import('./lib/services.mjs')
+
+const tmp = mkdtempSync(path.join(os.tmpdir(), 'ionfolio-test-'))
+chmodSync(tmp, 0o755)
+const ports = { postgres: await freePort(), s3: await freePort(), smtp: await freePort(), app: await freePort() }
+const services = await startServices({ storage: tmp, ports, database: 'ionfolio_test', mail: 'spool' })
+let app = null
+let code = 1
+try {
+  dbTask(['migrate'], services.env)
+  dbTask(['seed'], services.env)
+  ensureBuild()
+  const baseUrl = `http://127.0.0.1:${ports.app}`
+  const appEnv = {
+    ...services.env,
+    NODE_ENV: 'production',
+    HOST: '127.0.0.1',
+    PORT: String(ports.app),
+    NUXT_PUBLIC_BASE_URL: baseUrl,
+    // Tests vary X-Forwarded-For to act as different client addresses for the rate limits.
+    NUXT_TRUST_PROXY: 'true',
+  }
+  app = startChild(process.execPath, [path.join(ROOT, '.output', 'server', 'index.mjs')], { prefix: 'app', env: { ...process.env, ...appEnv } })
+  await waitFor(async () => (await fetch(`${baseUrl}/api/health`)).ok, { timeoutMs: 60_000, what: 'the app server' })
+  code = await vitest({
+    ...services.env,
+    IONFOLIO_TEST_BASE_URL: baseUrl,
+    IONFOLIO_TEST_MAIL_DIR: services.mailer.spool,
+    IONFOLIO_TEST_PG_DATA: services.pg.data,
+    IONFOLIO_TEST_PG_PORT: String(ports.postgres),
+    IONFOLIO_TEST_TMP: tmp,
+  })
+} catch (e) {
+  console.error(e.message)
+  code = 1
+} finally {
+  if (app && app.exitCode === null) {
+    app.kill('SIGTERM')
+    await app.exited
+  }
+  await services.stop()
+  if (!process.env.IONFOLIO_KEEP_TEST_DATA) rmSync(tmp, { recursive: true, force: true })
+}
+process.exit(code)

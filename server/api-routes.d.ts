@@ -1,0 +1,4 @@
+declare module '#api-routes' {
+  const routes: Array<{ route: string; method: string }>
+  export default routes
+}

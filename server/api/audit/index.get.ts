@@ -1,0 +1,54 @@
+import { z } from 'zod'
+import { stringify } from 'csv-stringify/sync'
+import { CAN } from '#shared/auth/roles'
+import { ListQuery } from '#shared/schemas/common'
+
+const Query = ListQuery.extend({
+  action: z.string().max(60).optional(),
+  entityType: z.string().max(40).optional(),
+  entityId: z.string().max(100).optional(),
+  actor: z.string().max(254).optional(),
+  from: z.iso.date().optional(),
+  to: z.iso.date().optional(),
+  format: z.enum(['json', 'csv']).default('json'),
+})
+
+const CSV_LIMIT = 100_000
+
+export default defineEventHandler(async (event) => {
+  requireRole(event, ...CAN.readAudit)
+  const query = queryValid(event, Query)
+
+  const db = useDb()
+  const base = db('audit_log').modify((b) => {
+    if (query.action) b.where('action', query.action)
+    if (query.entityType) b.where('entity_type', query.entityType)
+    if (query.entityId) b.where('entity_id', query.entityId)
+    if (query.actor) b.whereILike('actor_email', `%${query.actor}%`)
+    if (query.from) b.where('at', '>=', query.from)
+    if (query.to) b.where('at', '<', db.raw(`?::date + 1`, [query.to]))
+    if (query.q) b.where((w) => w.whereILike('action', `%${query.q}%`).orWhereILike('actor_email', `%${query.q}%`).orWhereILike('entity_id', `%${query.q}%`))
+  })
+  const order = query.sort === 'at' ? 'asc' : 'desc'
+
+  if (query.format === 'csv') {
+    const rows = await base.clone().select('*').orderBy('id', order).limit(CSV_LIMIT)
+    const csv = stringify(
+      rows.map((r) => [r.id, new Date(r.at).toISOString(), r.actor_email ?? '', r.action, r.entity_type, r.entity_id ?? '', r.before ? JSON.stringify(r.before) : '', r.after ? JSON.stringify(r.after) : '', r.address ?? '']),
+      { header: true, columns: ['id', 'at', 'actor', 'action', 'entity_type', 'entity_id', 'before', 'after', 'address'] },
+    )
+    setResponseHeader(event, 'Content-Type', 'text/csv; charset=utf-8')
+    setResponseHeader(event, 'Content-Disposition', 'attachment; filename="ionfolio-audit.csv"')
+    await writeAudit(db, event, { action: 'audit.exported', entityType: 'audit_log', after: { rows: rows.length } })
+    return csv
+  }
+
+  const [{ count }] = await base.clone().count<{ count: string }[]>({ count: '*' })
+  const rows = await base.clone().select('*').orderBy('id', order).limit(query.pageSize).offset((query.page - 1) * query.pageSize)
+  return {
+    items: rows.map((r) => ({ id: Number(r.id), at: r.at, actor: r.actor_email, action: r.action, entityType: r.entity_type, entityId: r.entity_id, before: r.before, after: r.after, address: r.address })),
+    total: Number(count),
+    page: query.page,
+    pageSize: query.pageSize,
+  }
+})

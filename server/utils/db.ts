@@ -1,0 +1,40 @@
+import knexFactory, { type Knex } from 'knex'
+
+let instance: Knex | null = null
+
+/** The app's one Knex instance, created on first use from runtimeConfig.databaseUrl. */
+export function useDb(): Knex {
+  if (!instance) {
+    const config = useRuntimeConfig()
+    instance = knexFactory({
+      client: 'pg',
+      connection: config.databaseUrl,
+      pool: { min: 0, max: Number(config.databasePoolMax) || 10 },
+      acquireConnectionTimeout: 5_000,
+    })
+  }
+  return instance
+}
+
+/** Closes the pool (Nitro's close hook). */
+export async function closeDb(): Promise<void> {
+  if (instance) {
+    const k = instance
+    instance = null
+    await k.destroy()
+  }
+}
+
+const UNAVAILABLE_CODES = new Set(['ECONNREFUSED', 'ECONNRESET', 'ETIMEDOUT', 'EPIPE', 'ENOTFOUND', '57P01', '57P02', '57P03', '08000', '08001', '08003', '08006'])
+
+/** True when an error means the database could not be reached (not that a query was wrong). */
+export function isDatabaseUnavailable(error: unknown): boolean {
+  let e: any = error
+  for (let depth = 0; e && depth < 5; depth++) {
+    if (UNAVAILABLE_CODES.has(e.code)) return true
+    if (typeof e.message === 'string' && /Knex: Timeout acquiring a connection|Connection terminated/.test(e.message)) return true
+    if (Array.isArray(e.errors) && e.errors.some(isDatabaseUnavailable)) return true
+    e = e.cause
+  }
+  return false
+}

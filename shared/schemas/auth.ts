@@ -1,0 +1,40 @@
+import { z } from 'zod'
+import { ROLES } from '../auth/roles'
+
+/** At least this many characters for a password (long passphrases beat composition rules). */
+export const PASSWORD_MIN_LENGTH = 12
+
+export const Email = z.string().trim().toLowerCase().max(254).pipe(z.email({ message: 'Enter a valid e-mail address' }))
+
+export const SignInBody = z.object({
+  email: Email,
+  password: z.string().min(1, 'Enter your password').max(1024),
+})
+
+export const Password = z
+  .string()
+  .min(PASSWORD_MIN_LENGTH, `Use at least ${PASSWORD_MIN_LENGTH} characters`)
+  .max(1024, 'Use at most 1024 characters')
+
+export const RoleSchema = z.enum(ROLES, { message: `Role must be one of: ${ROLES.join(', ')}` })
+
+export const InviteBody = z.object({
+  email: Email,
+  name: z.string().trim().min(1, 'Enter a name').max(120),
+  role: RoleSchema,
+})
+
+export const AcceptInvitationBody = z.object({
+  token: z.string().min(20).max(200),
+  password: Password,
+})
+
+export const UpdateUserBody = z
+  .object({
+    role: RoleSchema.optional(),
+    active: z.boolean().optional(),
+  })
+  .refine((b) => b.role !== undefined || b.active !== undefined, { message: 'Give a role or an active flag to change' })
+
+export type SignInInput = z.infer<typeof SignInBody>
+export type InviteInput = z.infer<typeof InviteBody>

@@ -1,0 +1,31 @@
+import { describe, it, expect, beforeAll } from 'vitest'
+import { randomUUID } from 'node:crypto'
+import { everyone, type Client, type RoleName } from '../support/api'
+
+type Who = RoleName | 'anonymous'
+let clients: Record<Who, Client>
+beforeAll(async () => {
+  clients = await everyone()
+})
+
+// Expected status per caller for every route so far (DESIGN.md §2). Bodies are deliberately
+// invalid where a route would otherwise write, so an allowed caller gets 400 (past the role
+// check) and nothing is changed.
+const MATRIX: Array<{ route: string; method: string; body?: unknown; expect: Record<Who, number> }> = [
+  { method: 'GET', route: '/api/auth/me', expect: { manager: 200, scientist: 200, technician: 200, auditor: 200, anonymous: 401 } },
+  { method: 'GET', route: '/api/health', expect: { manager: 200, scientist: 200, technician: 200, auditor: 200, anonymous: 200 } },
+  { method: 'GET', route: '/api/users', expect: { manager: 200, scientist: 403, technician: 403, auditor: 403, anonymous: 401 } },
+  { method: 'POST', route: '/api/users', body: { email: 'x' }, expect: { manager: 400, scientist: 403, technician: 403, auditor: 403, anonymous: 401 } },
+  { method: 'PATCH', route: `/api/users/${randomUUID()}`, body: { role: 'auditor' }, expect: { manager: 404, scientist: 403, technician: 403, auditor: 403, anonymous: 401 } },
+  { method: 'GET', route: '/api/audit', expect: { manager: 200, scientist: 403, technician: 403, auditor: 200, anonymous: 401 } },
+  { method: 'GET', route: '/api/audit?format=csv', expect: { manager: 200, scientist: 403, technician: 403, auditor: 200, anonymous: 401 } },
+]
+
+const cases = MATRIX.flatMap((m) => (Object.keys(m.expect) as Who[]).map((who) => [m.method, m.route, who, m.expect[who], m.body] as const))
+
+describe('every route, every role', () => {
+  it.each(cases)('%s %s as %s → %i', async (method, route, who, status, body) => {
+    const r = await clients[who].request(method, route, body)
+    expect(r.status).toBe(status)
+  })
+})
