@@ -18,7 +18,7 @@ export interface RadialGrid {
 }
 
 export interface GridOptions {
-  /** step in ln r; 0.03 keeps eigenvalues within ~1e-7 relative for every Z (Numerov h⁴) */
+  /** step in ln r; 0.04 keeps hydrogenic eigenvalues within ~1e-7 relative for every Z (Numerov h⁴) */
   h?: number
   /** innermost point, in units of 1/Z bohr */
   zrMin?: number
@@ -28,7 +28,7 @@ export interface GridOptions {
 
 /** A log grid from zrMin/Z to at least rMax bohr with an odd number of points. */
 export function makeLogGrid(z: number, options: GridOptions = {}): RadialGrid {
-  const h = options.h ?? 0.03
+  const h = options.h ?? 0.04
   const zrMin = options.zrMin ?? 1e-3
   const rMax = options.rMax ?? 60
   const x0 = Math.log(zrMin)
@@ -54,14 +54,16 @@ export function integrate(grid: RadialGrid, f: ArrayLike<number>, end = grid.siz
 
 /**
  * Running integral F_i = ∫_{x_0}^{x_i} g dx of samples g_i on the uniform x mesh, written into out.
- * Each interval uses the three-point formula h/12·(5g_i + 8g_{i+1} − g_{i+2}) (exact for parabolas),
- * mirrored on the last interval.
+ * Inner intervals use the four-point formula h/24·(−g_{i−1} + 13g_i + 13g_{i+1} − g_{i+2}) (exact for
+ * cubics), the two end intervals the three-point h/12·(5g_i + 8g_{i+1} − g_{i+2}) and its mirror.
  */
 export function cumulativeX(g: ArrayLike<number>, h: number, size: number, out: Float64Array): Float64Array {
-  const c = h / 12
+  const c3 = h / 12
+  const c4 = h / 24
   out[0] = 0
-  for (let i = 0; i < size - 2; i++) out[i + 1] = out[i] + c * (5 * g[i] + 8 * g[i + 1] - g[i + 2])
+  out[1] = c3 * (5 * g[0] + 8 * g[1] - g[2])
+  for (let i = 1; i < size - 2; i++) out[i + 1] = out[i] + c4 * (13 * (g[i] + g[i + 1]) - g[i - 1] - g[i + 2])
   const k = size - 2
-  out[k + 1] = out[k] + c * (5 * g[k + 1] + 8 * g[k] - g[k - 1])
+  out[k + 1] = out[k] + c3 * (5 * g[k + 1] + 8 * g[k] - g[k - 1])
   return out
 }

@@ -15,10 +15,13 @@ export interface Mixer {
 /** An Anderson mixer for vectors of the given length with inner-product weights w. */
 export function andersonMixer(weights: Float64Array, beta: number, depth: number): Mixer {
   const length = weights.length
-  let prevX: Float64Array | null = null
-  let prevF: Float64Array | null = null
-  let dX: Float64Array[] = []
-  let dF: Float64Array[] = []
+  const prevX = new Float64Array(length)
+  let prevF = new Float64Array(length)
+  let f = new Float64Array(length)
+  let started = false
+  // difference vectors live in a pool so a long run allocates nothing per step
+  const pool: Array<{ dx: Float64Array; df: Float64Array }> = []
+  let history: Array<{ dx: Float64Array; df: Float64Array }> = []
   // ⟨dF_i, dF_j⟩, kept across steps so each step adds one row instead of recomputing them all
   let gram: number[][] = []
 
@@ -30,48 +33,46 @@ export function andersonMixer(weights: Float64Array, beta: number, depth: number
 
   return {
     reset() {
-      prevX = null
-      prevF = null
-      dX = []
-      dF = []
+      started = false
+      pool.push(...history)
+      history = []
       gram = []
     },
     next(x, gx) {
-      const f = new Float64Array(length)
       for (let i = 0; i < length; i++) f[i] = gx[i] - x[i]
-      if (prevX && prevF) {
-        const ddx = new Float64Array(length)
-        const ddf = new Float64Array(length)
-        for (let i = 0; i < length; i++) {
-          ddx[i] = x[i] - prevX[i]
-          ddf[i] = f[i] - prevF[i]
-        }
-        dX.push(ddx)
-        dF.push(ddf)
-        const row = dF.map((d) => dot(d, ddf))
-        gram.forEach((g, i) => g.push(row[i]))
-        gram.push(row)
-        if (dX.length > depth) {
-          dX.shift()
-          dF.shift()
+      if (started) {
+        const slot =
+          history.length >= depth
+            ? history.shift()!
+            : (pool.pop() ?? { dx: new Float64Array(length), df: new Float64Array(length) })
+        if (gram.length >= depth) {
           gram.shift()
           for (const g of gram) g.shift()
         }
-      }
-      prevX = Float64Array.from(x)
-      prevF = f
-      const m = dF.length
-      const gamma = m > 0 ? leastSquares(gram, dF.map((d) => dot(d, f))) : []
-      const out = new Float64Array(length)
-      for (let i = 0; i < length; i++) {
-        let xb = x[i]
-        let fb = f[i]
-        for (let j = 0; j < m; j++) {
-          xb -= gamma[j] * dX[j][i]
-          fb -= gamma[j] * dF[j][i]
+        const { dx, df } = slot
+        for (let i = 0; i < length; i++) {
+          dx[i] = x[i] - prevX[i]
+          df[i] = f[i] - prevF[i]
         }
-        out[i] = xb + beta * fb
+        history.push(slot)
+        const row = history.map((h) => dot(h.df, df))
+        gram.forEach((g, i) => g.push(row[i]))
+        gram.push(row)
       }
+      started = true
+      prevX.set(x)
+      const m = history.length
+      const gamma = m > 0 ? leastSquares(gram, history.map((h) => dot(h.df, f))) : []
+      const out = new Float64Array(length)
+      for (let i = 0; i < length; i++) out[i] = x[i] + beta * f[i]
+      for (let j = 0; j < m; j++) {
+        const { dx, df } = history[j]
+        const gj = gamma[j]
+        for (let i = 0; i < length; i++) out[i] -= gj * (dx[i] + beta * df[i])
+      }
+      const t = prevF
+      prevF = f
+      f = t
       return out
     },
   }

@@ -20,7 +20,7 @@ export interface ScfOptions {
   maxIterations?: number
   /** self-consistency reached when ∫|p_out − p_in| dr summed over orbitals, per electron, is below this (default 1e-6) */
   tolerance?: number
-  /** log-grid step in ln r (default 0.03) */
+  /** log-grid step in ln r (default 0.04) */
   gridStep?: number
   /** outermost grid radius in bohr (default chosen from the charge and the outermost shell) */
   rMax?: number

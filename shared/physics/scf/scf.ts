@@ -127,7 +127,7 @@ export function runScf(z: number, subshells: SubshellOccupation[], options: ScfO
     }
     for (let i = 0; i < size; i++) vxcUp[i] = pUp[i] + pDown[i]
     const eH = hartree(grid, vxcUp, vH, hws)
-    const eXc = lsdOnGrid(grid.r, grid.dr, pUp, pDown, size, vxcUp, vxcDown)
+    const eXc = lsdOnGrid(grid.r, grid.dr, pUp, pDown, vxcUp, vxcDown)
     let eSic = 0
     for (let c = 0; c < count; c++) {
       const ch = channels[c]
@@ -145,6 +145,8 @@ export function runScf(z: number, subshells: SubshellOccupation[], options: ScfO
 
   let solutions: ChannelSolution[] = []
   let best = Infinity
+  // Eigenvalues need be no sharper than the densities they come from; the last iterations use 1e-11.
+  let eigenTolerance = 1e-8
   let worse = 0
   for (let iteration = 1; iteration <= maxIterations; iteration++) {
     buildPotentials(xIn)
@@ -152,7 +154,7 @@ export function runScf(z: number, subshells: SubshellOccupation[], options: ScfO
     solutions = []
     for (let c = 0; c < count; c++) {
       const ch = channels[c]
-    const s = solveBoundState(grid, potentials[c], z, ch.n, ch.l, energies[c], rws)
+    const s = solveBoundState(grid, potentials[c], z, ch.n, ch.l, energies[c], rws, eigenTolerance)
       if (typeof s === 'string') return fail(iteration, s)
       energies[c] = s.energy
       solutions.push({ channel: ch, energy: s.energy, p: s.p })
@@ -175,6 +177,7 @@ export function runScf(z: number, subshells: SubshellOccupation[], options: ScfO
       worse = 0
       best = residual
     }
+    eigenTolerance = Math.min(1e-8, Math.max(1e-11, (1e-4 * residual) / electrons))
     xIn = clipAndNormalise(mixer.next(xIn, xOut), channels, grid)
     if (iteration === maxIterations)
       return fail(iteration, `not self-consistent after ${iteration} iterations (residual ${(residual / electrons).toExponential(1)} per electron)`, solutions)

@@ -8,7 +8,7 @@
 import type { RadialGrid } from './grid'
 import { orbitalPieces } from './channels'
 import { hartree, type HartreeWorkspace } from './potential'
-import { lsdOnGrid } from './xc'
+import { polarisedOnGrid } from './xc'
 
 export interface SicWorkspace {
   p: Float64Array
@@ -38,9 +38,13 @@ export function selfInteraction(
 ): number {
   const size = grid.size
   const { p, vh, vxc } = ws
+  // Far out, where the orbital density is below 1e-20 per bohr, its Hartree potential is 1/r and its
+  // exchange–correlation potential below 1e-7 hartree: the correction stops there.
   let end = 0
   let charge = 0
-  for (let i = 0; i < size; i++) if (pChannel[i] > 0) end = i + 1
+  let peak = 0
+  for (let i = 0; i < size; i++) peak = Math.max(peak, pChannel[i])
+  for (let i = 0; i < size; i++) if (pChannel[i] > 1e-20 * peak) end = i + 1
   for (let i = 0; i < end; i++) charge += grid.dr[i] * Math.max(0, pChannel[i])
   const scale = charge > 0 ? 1 / charge : 0
   for (let i = 0; i < end; i++) p[i] = Math.max(0, pChannel[i]) * scale
@@ -51,7 +55,7 @@ export function selfInteraction(
   let energy = 0
   for (const { fraction, count } of orbitalPieces(perSpin)) {
     if (fraction !== 1) for (let i = 0; i < end; i++) p[i] *= fraction
-    const exc = lsdOnGrid(grid.r, grid.dr, p, null, end, vxc, null)
+    const exc = polarisedOnGrid(grid.r, grid.dr, p, end, vxc)
     if (fraction !== 1) for (let i = 0; i < end; i++) p[i] /= fraction
     const weight = (count * fraction) / perSpin
     for (let i = 0; i < size; i++) vOut[i] += weight * (fraction * vh[i] + (i < end ? vxc[i] : 0))

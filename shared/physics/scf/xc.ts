@@ -51,11 +51,8 @@ function vwnG(s: VwnSet, x: number, out: Float64Array, slot: number): void {
   out[slot + 1] = 0.5 * x * dGdx
 }
 
-/**
- * Energy density (per volume) and spin potentials at one point; writes [e, v↑, v↓] into out
- * (v↓ is left unset for a fully polarised density when upOnly is set).
- */
-export function lsdPoint(up: number, down: number, out: Float64Array, tmp = new Float64Array(6), upOnly = false): void {
+/** Energy density (per volume) and spin potentials at one point; writes [e, v↑, v↓] into out. */
+export function lsdPoint(up: number, down: number, out: Float64Array, tmp = new Float64Array(6)): void {
   const rho = up + down
   if (rho < DENSITY_FLOOR) {
     out[0] = 0
@@ -77,13 +74,6 @@ export function lsdPoint(up: number, down: number, out: Float64Array, tmp = new 
     ec = tmp[0]
     rsDec = tmp[1]
     dEcDzeta = 0
-  } else if (zeta === 1 && upOnly) {
-    // A fully polarised density whose spin-down potential is not wanted (every self-interaction
-    // term) needs only the ferromagnetic fit.
-    vwnG(FERRO, x, tmp, 2)
-    ec = tmp[2]
-    rsDec = tmp[3]
-    dEcDzeta = 0
   } else {
     vwnG(PARA, x, tmp, 0)
     vwnG(FERRO, x, tmp, 2)
@@ -102,33 +92,61 @@ export function lsdPoint(up: number, down: number, out: Float64Array, tmp = new 
   const common = ec - rsDec / 3
   out[0] = ex + rho * ec
   out[1] = VX * cu + common + (1 - zeta) * dEcDzeta
-  if (!(zeta === 1 && upOnly)) out[2] = VX * cd + common - (1 + zeta) * dEcDzeta
+  out[2] = VX * cd + common - (1 + zeta) * dEcDzeta
 }
 
 /**
  * Exchange–correlation on a radial grid from spin densities given as p_σ = 4πr²ρ_σ. Fills
- * vUp/vDown (hartree) over [0, end) and returns E_xc = ∫ 4πr² e_xc dr using the weights dr.
+ * vUp/vDown (hartree) and returns E_xc = ∫ 4πr² e_xc dr using the weights dr.
  */
 export function lsdOnGrid(
   r: Float64Array,
   dr: Float64Array,
   pUp: Float64Array,
-  pDown: Float64Array | null,
-  end: number,
+  pDown: Float64Array,
   vUp: Float64Array,
-  vDown: Float64Array | null,
+  vDown: Float64Array,
 ): number {
   const out = new Float64Array(3)
   const tmp = new Float64Array(6)
   let energy = 0
-  for (let i = 0; i < end; i++) {
+  for (let i = 0; i < r.length; i++) {
     const shell = 4 * Math.PI * r[i] * r[i]
-    const up = Math.max(0, pUp[i]) / shell
-    const down = pDown ? Math.max(0, pDown[i]) / shell : 0
-    lsdPoint(up, down, out, tmp, vDown === null)
+    lsdPoint(Math.max(0, pUp[i]) / shell, Math.max(0, pDown[i]) / shell, out, tmp)
     energy += dr[i] * shell * out[0]
     vUp[i] = out[1]
-    if (vDown) vDown[i] = out[2]
+    vDown[i] = out[2]
+  }
+  return energy
+}
+
+/**
+ * The same for a fully spin-polarised density p = 4πr²ρ↑ (ρ↓ = 0) over [0, end), the case of every
+ * self-interaction term: only the ferromagnetic fit is needed, so it is written out here. Fills
+ * the spin-up potential v and returns the energy.
+ */
+export function polarisedOnGrid(r: Float64Array, dr: Float64Array, p: Float64Array, end: number, v: Float64Array): number {
+  const { a, x0, b, c, q, x0Term } = FERRO
+  const atanFactor = (2 * b) / q
+  const atanFactor0 = (2 * (b + 2 * x0)) / q
+  let energy = 0
+  for (let i = 0; i < end; i++) {
+    const shell = 4 * Math.PI * r[i] * r[i]
+    const rho = p[i] / shell
+    if (!(rho > DENSITY_FLOOR)) {
+      v[i] = 0
+      continue
+    }
+    const cu = Math.cbrt(rho)
+    const x = Math.sqrt(RS_FACTOR / cu)
+    const X = x * x + b * x + c
+    const at = Math.atan(q / (2 * x + b))
+    const dx = x - x0
+    const lnX = Math.log(X)
+    const ec = a * (2 * Math.log(x) - lnX + atanFactor * at - x0Term * (2 * Math.log(Math.abs(dx)) - lnX + atanFactor0 * at))
+    const rsDec = 0.5 * x * a * (2 / x - (2 * (x + b)) / X - x0Term * (2 / dx - (2 * (x + b + x0)) / X))
+    energy += dr[i] * shell * rho * (CX * cu + ec)
+    v[i] = VX * cu + ec - rsDec / 3
   }
   return energy
 }
