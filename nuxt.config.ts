@@ -58,9 +58,15 @@ export default defineNuxtConfig({
   },
   nitro: {
     experimental: { tasks: true },
+    typescript: { tsConfig: { compilerOptions: { noUncheckedIndexedAccess: false } } },
   },
   typescript: {
+    // The physics engine indexes arrays in tight numeric loops, and the app and server compile it
+    // too: there the index check is noise, so it is off in every project alike.
+    tsConfig: { compilerOptions: { noUncheckedIndexedAccess: false } },
+    sharedTsConfig: { compilerOptions: { noUncheckedIndexedAccess: false } },
     nodeTsConfig: {
+      compilerOptions: { noUncheckedIndexedAccess: false },
       include: ['../tests/**/*.ts', '../scripts/**/*.ts', '../bench/**/*.ts', '../knex.config.ts', '../migrations/**/*.ts', '../seeds/**/*.ts'],
     },
   },

@@ -18,7 +18,8 @@ const runVitest = (extra, env) => startChild(process.execPath, [path.join(ROOT, 
 // (unit first: it is fastest and needs nothing). Explicit vitest arguments replace the sequence.
 async function vitest(env) {
   if (args.length) return runVitest(args, env)
-  let worst = 0
+  let worst = await startChild('npx', ['nuxt', 'typecheck'], { cwd: ROOT, stdio: 'inherit' }).exited
+  if (worst) console.error('Type check failed (nuxt typecheck)')
   for (const project of ['unit', 'api', 'e2e']) worst = Math.max(worst, await runVitest(['--project', project], env))
   return worst
 }

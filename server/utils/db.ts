@@ -1,4 +1,17 @@
 import knexFactory, { type Knex } from 'knex'
+import type { AuditRow, InvitationRow, SessionRow, SignInFailureRow, UserRow } from '#shared/types/db'
+
+// Typed tables: `db('users')` knows its columns. Declared here, beside useDb, so every
+// project that compiles a route (the server's and the pages' type inference) sees it.
+declare module 'knex/types/tables' {
+  interface Tables {
+    users: UserRow
+    sessions: SessionRow
+    invitations: InvitationRow
+    sign_in_failures: SignInFailureRow
+    audit_log: AuditRow
+  }
+}
 
 let instance: Knex | null = null
 
@@ -37,4 +50,10 @@ export function isDatabaseUnavailable(error: unknown): boolean {
     e = e.cause
   }
   return false
+}
+
+/** The row count of a (filtered, unordered) query. */
+export async function countRows(query: Knex.QueryBuilder): Promise<number> {
+  const row = (await query.clone().clearSelect().clearOrder().count({ count: '*' }).first()) as { count: string | number } | undefined
+  return Number(row?.count ?? 0)
 }

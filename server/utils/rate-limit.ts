@@ -24,7 +24,7 @@ export async function assertSignInAllowed(event: H3Event, email: string): Promis
   // The block lifts when enough of the oldest failures leave the window.
   const freeAt = Math.max(...blocking.map((list) => new Date(list[list.length - SIGN_IN_LIMIT]!.at).getTime() + SIGN_IN_WINDOW_MINUTES * 60_000))
   const retryAfter = Math.max(1, Math.ceil((freeAt - Date.now()) / 1000))
-  setResponseHeader(event, 'Retry-After', String(retryAfter))
+  setResponseHeader(event, 'Retry-After', retryAfter)
   throw createError({ statusCode: 429, statusMessage: 'Too many attempts', message: 'Too many failed sign-ins; try again later', data: { retryAfterSeconds: retryAfter } })
 }
 

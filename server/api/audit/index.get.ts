@@ -20,7 +20,7 @@ export default defineEventHandler(async (event) => {
   const query = queryValid(event, Query)
 
   const db = useDb()
-  const base = db('audit_log').modify((b) => {
+  const filtered = () => db('audit_log').where((b) => {
     if (query.action) b.where('action', query.action)
     if (query.entityType) b.where('entity_type', query.entityType)
     if (query.entityId) b.where('entity_id', query.entityId)
@@ -32,7 +32,7 @@ export default defineEventHandler(async (event) => {
   const order = query.sort === 'at' ? 'asc' : 'desc'
 
   if (query.format === 'csv') {
-    const rows = await base.clone().select('*').orderBy('id', order).limit(CSV_LIMIT)
+    const rows = await filtered().select('*').orderBy('id', order).limit(CSV_LIMIT)
     const csv = stringify(
       rows.map((r) => [r.id, new Date(r.at).toISOString(), r.actor_email ?? '', r.action, r.entity_type, r.entity_id ?? '', r.before ? JSON.stringify(r.before) : '', r.after ? JSON.stringify(r.after) : '', r.address ?? '']),
       { header: true, columns: ['id', 'at', 'actor', 'action', 'entity_type', 'entity_id', 'before', 'after', 'address'] },
@@ -43,11 +43,11 @@ export default defineEventHandler(async (event) => {
     return csv
   }
 
-  const [{ count }] = await base.clone().count<{ count: string }[]>({ count: '*' })
-  const rows = await base.clone().select('*').orderBy('id', order).limit(query.pageSize).offset((query.page - 1) * query.pageSize)
+  const total = await countRows(filtered())
+  const rows = await filtered().select('*').orderBy('id', order).limit(query.pageSize).offset((query.page - 1) * query.pageSize)
   return {
     items: rows.map((r) => ({ id: Number(r.id), at: r.at, actor: r.actor_email, action: r.action, entityType: r.entity_type, entityId: r.entity_id, before: r.before, after: r.after, address: r.address })),
-    total: Number(count),
+    total,
     page: query.page,
     pageSize: query.pageSize,
   }

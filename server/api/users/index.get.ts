@@ -8,14 +8,14 @@ export default defineEventHandler(async (event) => {
   const { q, sort, page, pageSize } = queryValid(event, ListQuery)
 
   const db = useDb()
-  const base = db('users').modify((b) => {
-    if (q) b.where((w) => w.whereILike('name', `%${q}%`).orWhereILike('email', `%${q}%`))
-  })
-  const [{ count }] = await base.clone().count<{ count: string }[]>({ count: '*' })
+  const filtered = () =>
+    db('users').where((w) => {
+      if (q) w.whereILike('name', `%${q}%`).orWhereILike('email', `%${q}%`)
+    })
+  const total = await countRows(filtered())
   const desc = sort?.startsWith('-')
   const column = SORTS[(sort ?? 'name').replace(/^-/, '')] ?? 'name'
-  const rows = await base
-    .clone()
+  const rows = await filtered()
     .select('id', 'email', 'name', 'role', 'active', 'created_at', 'deactivated_at')
     .orderBy(column, desc ? 'desc' : 'asc')
     .orderBy('id')
@@ -30,7 +30,7 @@ export default defineEventHandler(async (event) => {
 
   return {
     items: rows.map((r) => ({ id: r.id, email: r.email, name: r.name, role: r.role, active: r.active, createdAt: r.created_at, deactivatedAt: r.deactivated_at })),
-    total: Number(count),
+    total,
     page,
     pageSize,
     invitations: invitations.map((i) => ({ id: i.id, email: i.email, name: i.name, role: i.role, expiresAt: i.expires_at, createdAt: i.created_at })),

@@ -1,4 +1,0 @@
-declare module '#api-routes' {
-  const routes: Array<{ route: string; method: string }>
-  export default routes
-}
