@@ -4,8 +4,9 @@
  *
  *   tsx scripts/reference/build-fixtures.ts PYMATGEN_PERIODIC_TABLE_JSON ASE_DATA_INIT_PY [ASE_VERSION]
  *
- * - tests/fixtures/reference/pymatgen-neutral-atoms.json: neutral ground configurations and
- *   ground levels (NIST ASD) from python3-pymatgen's periodic_table.json.
+ * - tests/fixtures/reference/pymatgen-elements.json: per element from python3-pymatgen's
+ *   periodic_table.json: neutral ground configuration and ground level, the ionisation energies of
+ *   the neutral atom and of the one-electron ion (NIST ASD), and the electron affinity.
  * - tests/fixtures/reference/ase-iupac2016-atomic-weights.json: `atomic_masses_iupac2016` from
  *   python3-ase's ase/data/__init__.py (IUPAC 2013 standard atomic weights, published 2016), with
  *   the trailing comment of each line (interval or mass number of the isotope used).
@@ -27,22 +28,30 @@ mkdirSync(dir, { recursive: true })
 
 const neutral = loadPymatgen(pymatgenPath).map((e) => {
   const s = e.structure ? normaliseStructure(e.structure) : null
+  // Only lists with one value per charge state can be indexed by charge (see build-nist-asd.ts).
+  const ie = e.ionisationEnergies.length === e.z ? e.ionisationEnergies : []
   return {
     z: e.z,
     symbol: e.symbol,
     configuration: s?.text ?? null,
     tentative: s?.tentative ?? false,
     groundLevel: e.groundLevel,
+    firstIonisationEv: ie[0] ?? null,
+    hydrogenLikeIonisationEv: ie[e.z - 1] ?? null,
+    electronAffinityEv: e.electronAffinity,
   }
 })
 writeFileSync(
-  `${dir}pymatgen-neutral-atoms.json`,
+  `${dir}pymatgen-elements.json`,
   JSON.stringify(
     {
       source: 'NIST Atomic Spectra Database, as carried by pymatgen',
       package: PYMATGEN_PACKAGE,
       path: PYMATGEN_PATH,
-      fields: "'Electronic structure' ('.' separators and <sup> removed), 'Ground level' as given",
+      fields:
+        "'Electronic structure' ('.' separators and <sup> removed), 'Ground level' as given, " +
+        "'Ionization energies' [0] and [Z-1] (null where the list is not one value per charge state), " +
+        "'Electron affinity' (eV; pymatgen names no source for it)",
       elements: neutral,
     },
     null,
