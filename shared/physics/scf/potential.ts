@@ -54,12 +54,13 @@ function thomasFermi(x: number): number {
 /**
  * Starting potential for Z protons and N electrons: the Thomas–Fermi screening of N electrons
  * spread like the neutral atom's (length 0.8853·Z^{−1/3} bohr), but never shallower than the
- * −(Z − N + 1)/r an outer electron must see (the tail argument of Latter 1955).
+ * −(Z − N + 1)/r an outer electron must see (the tail argument of Latter 1955), nor than −1/r, so
+ * that an anion's extra electron starts bound too.
  */
 export function startingPotential(grid: RadialGrid, z: number, electrons: number): Float64Array {
   const b = 0.8853 / Math.cbrt(z)
   const v = new Float64Array(grid.size)
-  const tail = z - electrons + 1
+  const tail = Math.max(1, z - electrons + 1)
   for (let i = 0; i < grid.size; i++) {
     const r = grid.r[i]
     const zr = z - electrons + electrons * thomasFermi(r / b)

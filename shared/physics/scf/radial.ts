@@ -63,6 +63,7 @@ export function solveBoundState(
   let e = guess > eLo && guess < eHi ? guess : split()
 
   for (let step = 0; step < MAX_STEPS; step++) {
+    if (eHi - eLo <= 1e-13 * Math.max(1, Math.abs(eHi))) return `no bound ${n},${l} state inside ${r[size - 1].toFixed(0)} bohr`
     let icl = -1
     for (let i = 0; i < size; i++) {
       f[i] = 1 - c * (l2 + 2 * r[i] * r[i] * (v[i] - e))

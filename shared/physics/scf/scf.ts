@@ -3,20 +3,14 @@
  * potentials, Anderson mixing of the orbital densities, until input and output agree.
  */
 import { buildChannels, checkSubshells, type Channel, type SubshellOccupation } from './channels'
+import { createField, totalEnergy, type ChannelSolution } from './field'
 import { makeLogGrid, type RadialGrid } from './grid'
 import { andersonMixer } from './mixing'
 import { METHOD_NAMES, type ScfFunctional, type ScfOptions } from './options'
-import { hartree, hartreeWorkspace, startingPotential } from './potential'
+import { startingPotential } from './potential'
 import { radialWorkspace, solveBoundState } from './radial'
-import { selfInteraction, sicWorkspace } from './sic'
-import { lsdOnGrid } from './xc'
 
-/** One converged channel: its eigenvalue and radial function P (∫P² dr = 1). */
-export interface ChannelSolution {
-  channel: Channel
-  energy: number
-  p: Float64Array
-}
+export type { ChannelSolution } from './field'
 
 /** Everything the loop knows at the end; result.ts turns it into the public ScfResult. */
 export interface ScfRun {
@@ -33,6 +27,8 @@ export interface ScfRun {
 
 const MIX_BETA = 0.6
 const MIX_DEPTH = 5
+/** how many times a run may step back after an orbital came out unbound */
+const MAX_BACKOFFS = 4
 
 /**
  * Outer grid radius, bohr: far enough that the outermost orbital (hydrogen-like size n²/(q + 1)
@@ -65,8 +61,6 @@ export function runScf(z: number, subshells: SubshellOccupation[], options: ScfO
   const size = grid.size
   const count = channels.length
   const rws = radialWorkspace(grid)
-  const hws = hartreeWorkspace(grid)
-  const sws = sicWorkspace(grid)
   const fail = (iterations: number, failure: string, solutions: ChannelSolution[] = []): ScfRun => ({
     ...base,
     converged: false,
@@ -101,72 +95,52 @@ export function runScf(z: number, subshells: SubshellOccupation[], options: ScfO
   const weights = new Float64Array(count * size)
   for (let c = 0; c < count; c++) weights.set(grid.dr, c * size)
   const mixer = andersonMixer(weights, MIX_BETA, MIX_DEPTH)
-  const potentials = Array.from({ length: count }, () => new Float64Array(size))
-  const sicEnergy = new Float64Array(count)
-  const pUp = new Float64Array(size)
-  const pDown = new Float64Array(size)
-  const vH = new Float64Array(size)
-  const vxcUp = new Float64Array(size)
-  const vxcDown = new Float64Array(size)
-  const vSic = new Float64Array(size)
-
-  const buildPotentials = (x: Float64Array): { eH: number; eXc: number; eSic: number } => {
-    pUp.fill(0)
-    pDown.fill(0)
-    for (let c = 0; c < count; c++) {
-      const ch = channels[c]
-      const o = c * size
-      for (let i = 0; i < size; i++) {
-        const q = x[o + i]
-        if (ch.spin === 'pair') {
-          pUp[i] += 0.5 * q
-          pDown[i] += 0.5 * q
-        } else if (ch.spin === 'up') pUp[i] += q
-        else pDown[i] += q
-      }
-    }
-    for (let i = 0; i < size; i++) vxcUp[i] = pUp[i] + pDown[i]
-    const eH = hartree(grid, vxcUp, vH, hws)
-    const eXc = lsdOnGrid(grid.r, grid.dr, pUp, pDown, vxcUp, vxcDown)
-    let eSic = 0
-    for (let c = 0; c < count; c++) {
-      const ch = channels[c]
-      const v = potentials[c]
-      const vxc = ch.spin === 'down' ? vxcDown : vxcUp
-      for (let i = 0; i < size; i++) v[i] = -z / grid.r[i] + vH[i] + vxc[i]
-      if (functional === 'lsd-sic') {
-        sicEnergy[c] = selfInteraction(grid, x.subarray(c * size, (c + 1) * size), ch.perSpin, ch.spins, vSic, sws, hws)
-        eSic += sicEnergy[c]
-        for (let i = 0; i < size; i++) v[i] -= vSic[i]
-      }
-    }
-    return { eH, eXc, eSic }
-  }
+  const field = createField(z, grid, channels, functional)
 
   let solutions: ChannelSolution[] = []
   let best = Infinity
+  let worse = 0
+  let backoffs = 0
+  let lastGood: { x: Float64Array; out: Float64Array } | null = null
+  let lastUnbound = ''
   // Eigenvalues need be no sharper than the densities they come from; the last iterations use 1e-11.
   let eigenTolerance = 1e-8
-  let worse = 0
   for (let iteration = 1; iteration <= maxIterations; iteration++) {
-    buildPotentials(xIn)
+    field.build(xIn)
     const xOut = new Float64Array(count * size)
     solutions = []
-    for (let c = 0; c < count; c++) {
+    let unbound: string | null = null
+    for (let c = 0; c < count && !unbound; c++) {
       const ch = channels[c]
-    const s = solveBoundState(grid, potentials[c], z, ch.n, ch.l, energies[c], rws, eigenTolerance)
-      if (typeof s === 'string') return fail(iteration, s)
+      const s = solveBoundState(grid, field.potentials[c], z, ch.n, ch.l, energies[c], rws, eigenTolerance)
+      if (typeof s === 'string') {
+        unbound = s
+        break
+      }
       energies[c] = s.energy
       solutions.push({ channel: ch, energy: s.energy, p: s.p })
       for (let i = 0; i < size; i++) xOut[c * size + i] = ch.occupation * s.p[i] * s.p[i]
     }
+    if (unbound) {
+      // An extrapolated density can push a weakly bound orbital out of the atom; step back to a
+      // short linear step from the last good iteration before giving up.
+      if (!lastGood || backoffs >= MAX_BACKOFFS) return fail(iteration, unbound)
+      lastUnbound = unbound
+      backoffs++
+      mixer.reset()
+      const { x, out } = lastGood
+      const step = 0.3 / backoffs
+      xIn = clipAndNormalise(x.map((v, k) => v + step * (out[k] - v)), channels, grid)
+      continue
+    }
+    lastGood = { x: xIn, out: xOut }
     let residual = 0
     for (let k = 0; k < xOut.length; k++) residual += weights[k] * Math.abs(xOut[k] - xIn[k])
     if (!Number.isFinite(residual)) return fail(iteration, 'the density became non-finite', solutions)
     if (residual < tolerance) {
-      const totalEnergy = totalEnergyOf(z, grid, solutions, potentials, xOut, buildPotentials)
-      if (!Number.isFinite(totalEnergy)) return fail(iteration, 'the total energy is not finite', solutions)
-      return { ...base, converged: true, iterations: iteration, totalEnergy, solutions }
+      const energy = totalEnergy(z, grid, field, solutions, xOut)
+      if (!Number.isFinite(energy)) return fail(iteration, 'the total energy is not finite', solutions)
+      return { ...base, converged: true, iterations: iteration, totalEnergy: energy, solutions }
     }
     // A run of steps that make the residual worse means the history misleads: start it afresh.
     if (residual < best) {
@@ -179,10 +153,12 @@ export function runScf(z: number, subshells: SubshellOccupation[], options: ScfO
     }
     eigenTolerance = Math.min(1e-8, Math.max(1e-11, (1e-4 * residual) / electrons))
     xIn = clipAndNormalise(mixer.next(xIn, xOut), channels, grid)
-    if (iteration === maxIterations)
-      return fail(iteration, `not self-consistent after ${iteration} iterations (residual ${(residual / electrons).toExponential(1)} per electron)`, solutions)
+    if (iteration === maxIterations) {
+      const perElectron = (residual / electrons).toExponential(1)
+      return fail(iteration, `not self-consistent after ${iteration} iterations (residual ${perElectron} per electron)`, solutions)
+    }
   }
-  return fail(maxIterations, 'no iterations were allowed', solutions)
+  return fail(maxIterations, `not self-consistent after ${maxIterations} iterations, the last ended by: ${lastUnbound}`)
 }
 
 /** The seed's orbital for a channel: same subshell and spin, else the same subshell in either spin. */
@@ -208,36 +184,4 @@ function clipAndNormalise(x: Float64Array, channels: Channel[], grid: RadialGrid
     for (let i = 0; i < size; i++) x[o + i] *= s
   }
   return x
-}
-
-/**
- * E = T_s + E_nuc + E_H + E_xc + E_SIC of the output orbitals, with the kinetic energy of each orbital
- * from its own eigenvalue, T = ε − ⟨P|v|P⟩ in the potential it was solved in.
- */
-function totalEnergyOf(
-  z: number,
-  grid: RadialGrid,
-  solutions: ChannelSolution[],
-  potentials: Float64Array[],
-  xOut: Float64Array,
-  build: (x: Float64Array) => { eH: number; eXc: number; eSic: number },
-): number {
-  const size = grid.size
-  let kinetic = 0
-  let nuclear = 0
-  for (let c = 0; c < solutions.length; c++) {
-    const { channel, energy, p } = solutions[c]
-    const v = potentials[c]
-    let pot = 0
-    let nuc = 0
-    for (let i = 0; i < size; i++) {
-      const w = grid.dr[i] * p[i] * p[i]
-      pot += w * v[i]
-      nuc += w / grid.r[i]
-    }
-    kinetic += channel.occupation * (energy - pot)
-    nuclear -= channel.occupation * z * nuc
-  }
-  const { eH, eXc, eSic } = build(xOut)
-  return kinetic + nuclear + eH + eXc + eSic
 }
