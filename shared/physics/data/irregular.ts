@@ -1,0 +1,118 @@
+/**
+ * Ground configurations and terms that the filling rules do not give, with where each comes from.
+ *
+ * No package holds ground configurations of ions. Ion entries below are NIST ASD ground levels
+ * recalled rather than read: every one is marked "from memory" and should be re-read against
+ * https://physics.nist.gov/asd (Levels, ground level of the spectrum) before being relied on.
+ */
+
+export interface ConfigurationEntry {
+  z: number
+  charge: number
+  configuration: string
+  source: string
+}
+
+const NIST_VIA_PYMATGEN = "NIST ASD via pymatgen periodic_table.json 'Electronic structure'"
+const NIST_FROM_MEMORY = 'NIST ASD ground level (from memory)'
+
+/**
+ * Neutral atoms whose NIST ASD ground configuration is not the Madelung one: every such Z in
+ * pymatgen's periodic_table.json (Z ≤ 103; Lr is marked tentative there). Z ≥ 104 have no entry
+ * there and are left to Madelung.
+ */
+export const IRREGULAR_NEUTRALS: readonly ConfigurationEntry[] = [
+  [24, '[Ar] 3d5 4s1'],
+  [29, '[Ar] 3d10 4s1'],
+  [41, '[Kr] 4d4 5s1'],
+  [42, '[Kr] 4d5 5s1'],
+  [44, '[Kr] 4d7 5s1'],
+  [45, '[Kr] 4d8 5s1'],
+  [46, '[Kr] 4d10'],
+  [47, '[Kr] 4d10 5s1'],
+  [57, '[Xe] 5d1 6s2'],
+  [58, '[Xe] 4f1 5d1 6s2'],
+  [64, '[Xe] 4f7 5d1 6s2'],
+  [78, '[Xe] 4f14 5d9 6s1'],
+  [79, '[Xe] 4f14 5d10 6s1'],
+  [89, '[Rn] 6d1 7s2'],
+  [90, '[Rn] 6d2 7s2'],
+  [91, '[Rn] 5f2 6d1 7s2'],
+  [92, '[Rn] 5f3 6d1 7s2'],
+  [93, '[Rn] 5f4 6d1 7s2'],
+  [96, '[Rn] 5f7 6d1 7s2'],
+  [103, '[Rn] 5f14 7s2 7p1'],
+].map(([z, configuration]) => ({ z: z as number, charge: 0, configuration: configuration as string, source: NIST_VIA_PYMATGEN }))
+
+/**
+ * Singly to triply charged ions whose NIST ASD ground configuration departs from the removal
+ * rule of configuration.ts (valence electrons leave highest n first, within n highest l).
+ */
+export const IRREGULAR_IONS: readonly ConfigurationEntry[] = [
+  [23, 1, '[Ar] 3d4'], // V II 5D0
+  [27, 1, '[Ar] 3d8'], // Co II 3F4
+  [28, 1, '[Ar] 3d9'], // Ni II 2D5/2
+  [39, 1, '[Kr] 5s2'], // Y II 1S0
+  [57, 1, '[Xe] 5d2'], // La II 3F2
+  [58, 1, '[Xe] 4f1 5d2'], // Ce II 4H°7/2
+  [58, 2, '[Xe] 4f2'], // Ce III 3H4
+  [71, 1, '[Xe] 4f14 6s2'], // Lu II 1S0
+  [71, 2, '[Xe] 4f14 6s1'], // Lu III 2S1/2
+  [72, 1, '[Xe] 4f14 5d1 6s2'], // Hf II 2D3/2
+  [89, 1, '[Rn] 7s2'], // Ac II 1S0
+  [89, 2, '[Rn] 7s1'], // Ac III 2S1/2
+  [90, 2, '[Rn] 5f1 6d1'], // Th III 3H°4
+  [90, 3, '[Rn] 5f1'], // Th IV 2F°5/2
+  [91, 1, '[Rn] 5f2 7s2'], // Pa II 3H4
+  [92, 1, '[Rn] 5f3 7s2'], // U II 4I°9/2
+  [92, 2, '[Rn] 5f4'], // U III 5I4
+  [96, 1, '[Rn] 5f7 7s2'], // Cm II 8S°7/2
+].map(([z, charge, configuration]) => ({
+  z: z as number,
+  charge: charge as number,
+  configuration: configuration as string,
+  source: NIST_FROM_MEMORY,
+}))
+
+/**
+ * Anions whose ground configuration is not the neutral's plus one electron in Madelung order:
+ * the alkaline-earth anions bind an np electron (Ca⁻ 4s2 4p), as do Sc⁻ and Y⁻; La⁻, Ce⁻ and Th⁻
+ * add a d electron. All from memory of the photodetachment literature. Other lanthanide and
+ * actinide anions are uncertain; the engine keeps the Madelung result there, and every anion
+ * record carries a caution saying its configuration is less certain than an ion's.
+ */
+export const IRREGULAR_ANIONS: readonly ConfigurationEntry[] = [
+  [20, '[Ar] 4s2 4p1'],
+  [21, '[Ar] 3d1 4s2 4p1'],
+  [38, '[Kr] 5s2 5p1'],
+  [39, '[Kr] 4d1 5s2 5p1'],
+  [56, '[Xe] 6s2 6p1'],
+  [57, '[Xe] 5d2 6s2'],
+  [58, '[Xe] 4f1 5d2 6s2'],
+  [88, '[Rn] 7s2 7p1'],
+  [90, '[Rn] 6d3 7s2'],
+].map(([z, configuration]) => ({
+  z: z as number,
+  charge: -1,
+  configuration: configuration as string,
+  source: 'photodetachment studies (from memory)',
+}))
+
+export interface TermEntry {
+  z: number
+  charge: number
+  term: string
+  source: string
+}
+
+/**
+ * Ground levels that are not the Hund's-rules term of the ground configuration. The neutral
+ * entries are every such case in pymatgen's 'Ground level' (see tests/unit/physics/terms.test.ts);
+ * Pb I is listed by NIST in jj coupling, (1/2,1/2)0, whose J agrees with Hund's 3P0, so it is not here.
+ */
+export const NON_HUND_TERMS: readonly TermEntry[] = [
+  { z: 58, charge: 0, term: '1G°4', source: "NIST ASD via pymatgen periodic_table.json 'Ground level'" },
+  { z: 58, charge: 1, term: '4H°7/2', source: NIST_FROM_MEMORY },
+  { z: 21, charge: -1, term: '1D°2', source: 'photodetachment studies (from memory)' },
+  { z: 39, charge: -1, term: '1D°2', source: 'photodetachment studies (from memory)' },
+]
