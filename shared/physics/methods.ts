@@ -1,0 +1,112 @@
+/**
+ * The ionisation-energy methods the engine names in its output, and the constants they use.
+ */
+import { getElement, getIsotope } from './elements'
+import { slaterTotalEnergyRydberg, nStar, screeningConstant } from './slater'
+import type { Subshell } from './subshells'
+
+export type MethodName = 'slater-hydrogenic' | 'slater-total-energy' | 'dirac-hydrogen-like' | 'scf-delta' | 'scf-eigenvalue'
+
+export interface MethodInfo {
+  name: MethodName
+  /** one line for a page or a --help text */
+  description: string
+  citation: string
+  /** true when the estimate comes from the SCF solver in ./scf rather than this module */
+  scf: boolean
+}
+
+export const METHODS: readonly MethodInfo[] = [
+  {
+    name: 'slater-hydrogenic',
+    description: 'Hydrogen-like energy of the next electron to leave: 13.6057 eV · Z_eff² / n*², Z_eff and n* by Slater\'s rules',
+    citation: 'J. C. Slater, Phys. Rev. 36, 57 (1930)',
+    scf: false,
+  },
+  {
+    name: 'slater-total-energy',
+    description: 'Difference of Slater total energies −13.6057 eV · Σ N_i (Z_eff,i / n*_i)² of the next ion and the species',
+    citation: 'J. C. Slater, Phys. Rev. 36, 57 (1930)',
+    scf: false,
+  },
+  {
+    name: 'dirac-hydrogen-like',
+    description: 'One-electron ions only: Dirac 1s binding m_r c² (1 − √(1 − (Zα)²)) with the reduced mass, point nucleus, no QED',
+    citation: 'P. A. M. Dirac, Proc. R. Soc. A 117, 610 (1928); constants CODATA 2018 (Tiesinga et al., Rev. Mod. Phys. 93, 025010 (2021))',
+    scf: false,
+  },
+  {
+    name: 'scf-delta',
+    description: 'Total-energy difference of self-consistent central-field (Hartree–Fock–Slater) solutions of the next ion and the species',
+    citation: 'F. Herman and S. Skillman, Atomic Structure Calculations (Prentice-Hall, 1963)',
+    scf: true,
+  },
+  {
+    name: 'scf-eigenvalue',
+    description: 'Minus the orbital eigenvalue of the outermost electron in the self-consistent central-field solution',
+    citation: 'F. Herman and S. Skillman, Atomic Structure Calculations (Prentice-Hall, 1963)',
+    scf: true,
+  },
+]
+
+export const METHOD_NAMES: readonly MethodName[] = METHODS.map((m) => m.name)
+
+/** The Rydberg energy the Slater methods use, 13.6057 eV as DESIGN §5 fixes it (CODATA: 13.605693…). */
+export const SLATER_RYDBERG_EV = 13.6057
+
+/** CODATA 2018 recommended values (E. Tiesinga et al., Rev. Mod. Phys. 93, 025010 (2021)). */
+export const CODATA_2018 = {
+  fineStructure: 7.2973525693e-3,
+  electronMassEv: 510998.95,
+  atomicMassUnitEv: 931494102.42,
+} as const
+
+/** slater-hydrogenic: 13.6057 eV · (Z_eff / n*)² for one electron of `from` in the configuration. */
+export function slaterHydrogenicEv(z: number, subshells: readonly Subshell[], from: { n: number; l: number }): number {
+  const zEff = z - screeningConstant(subshells, from)
+  return SLATER_RYDBERG_EV * (zEff / nStar(from.n)) ** 2
+}
+
+/** slater-total-energy: E_Slater(next ion) − E_Slater(species), in eV. */
+export function slaterTotalEnergyEv(z: number, species: readonly Subshell[], nextIon: readonly Subshell[]): number {
+  return SLATER_RYDBERG_EV * (slaterTotalEnergyRydberg(z, nextIon) - slaterTotalEnergyRydberg(z, species))
+}
+
+export interface NuclearMass {
+  /** nuclear mass, eV/c² */
+  eV: number
+  massNumber: number
+  /** how the mass was chosen, for the record */
+  basis: string
+}
+
+/**
+ * Nuclear mass for the reduced-mass correction: atomic mass of the isotope minus Z electron
+ * masses (the electrons' binding, under 1 MeV even for U, changes the reduced mass by < 1e−9).
+ * Without a mass number, the most abundant natural isotope — what an analysing magnet selects
+ * from a natural sample — or, for an element with none, its bracketed reference isotope.
+ */
+export function nuclearMass(z: number, massNumber: number | null): NuclearMass {
+  const element = getElement(z)
+  if (!element) throw new RangeError(`no element with Z = ${z}`)
+  const a = massNumber ?? element.principalMassNumber
+  const isotope = getIsotope(z, a)
+  const basis =
+    massNumber !== null
+      ? `isotope ${a}${element.symbol}`
+      : element.naturalIsotopes.length > 0
+        ? `most abundant isotope ${a}${element.symbol}`
+        : `reference isotope ${a}${element.symbol}`
+  // A mass number outside the nuclide table falls back to A u: the reduced mass moves by < 1e−6.
+  const atomicU = isotope?.massU ?? a
+  return { eV: atomicU * CODATA_2018.atomicMassUnitEv - z * CODATA_2018.electronMassEv, massNumber: a, basis }
+}
+
+/** dirac-hydrogen-like: 1s binding energy of a one-electron ion with nuclear mass M (eV/c²). */
+export function diracHydrogenLikeEv(z: number, nuclearMassEv: number): number {
+  const me = CODATA_2018.electronMassEv
+  const reduced = (me * nuclearMassEv) / (me + nuclearMassEv)
+  const x = (z * CODATA_2018.fineStructure) ** 2
+  // 1 − √(1 − x) written as x / (1 + √(1 − x)) keeps its digits for hydrogen, where x ≈ 5e−5.
+  return (reduced * x) / (1 + Math.sqrt(1 - x))
+}
