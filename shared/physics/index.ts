@@ -1,0 +1,34 @@
+/**
+ * The species engine's public face, shared by the server routes, the pages and the command line.
+ * Pure TypeScript with no Node, HTTP, database or Vue imports, so it also runs in the browser.
+ * The SCF solver (./scf) is not pulled in here: it is heavy, and callers that want it import
+ * ./scf/index themselves and pass its estimates to describeSpecies.
+ */
+export { ENGINE_VERSION } from './version'
+export type { Subshell } from './subshells'
+export { formatConfiguration, formatWithCore, parseConfiguration, subshellLabel, capacity } from './subshells'
+export type { GroundConfiguration, ConfigurationRule } from './configuration'
+export { groundConfiguration, nextElectronSubshell } from './configuration'
+export type { Element, Isotope } from './elements'
+export { getElement, allElements, getIsotope, MAX_Z, ISOTOPE_SOURCE } from './elements'
+export type { ParsedSpecies } from './notation'
+export { parseSpecies, formatSpecies, SpeciesParseError, ACCEPTED_NOTATIONS, toRoman, fromRoman } from './notation'
+export type { LsTerm, OpenSubshell } from './ls-terms'
+export { lsTerms } from './ls-terms'
+export type { GroundTerm, OrbitalBox, SubshellBoxes } from './terms'
+export { groundTerm, orbitalBoxes, unpairedElectrons } from './terms'
+export type { ScreeningRow } from './slater'
+export { slaterScreening, screeningConstant, nStar } from './slater'
+export type { MethodInfo, MethodName, NuclearMass } from './methods'
+export { METHODS, METHOD_NAMES, CODATA_2018, SLATER_RYDBERG_EV, diracHydrogenLikeEv, nuclearMass } from './methods'
+export type { SourcedValue, ElectronAffinity, ReferenceGroundLevel } from './reference'
+export {
+  IONISATION_SOURCE,
+  electronAffinity,
+  referenceIonisationEv,
+  referenceIonisationSeries,
+  referenceGroundLevel,
+} from './reference'
+export type { DescribeOptions, Estimate, SpeciesRecord } from './record'
+export { describeSpecies } from './record'
+export { formatRecord } from './record-text'
