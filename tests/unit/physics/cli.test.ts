@@ -1,0 +1,50 @@
+import { spawnSync } from 'node:child_process'
+import { fileURLToPath } from 'node:url'
+import { describe, expect, it } from 'vitest'
+
+const root = fileURLToPath(new URL('../../../', import.meta.url))
+
+function run(...args: string[]) {
+  const out = spawnSync('npx', ['tsx', 'scripts/species.ts', ...args], { cwd: root, encoding: 'utf8', timeout: 60_000 })
+  return { status: out.status, stdout: out.stdout, stderr: out.stderr }
+}
+
+describe('npm run species (scripts/species.ts as a child process)', () => {
+  it('prints one JSON line per argument in input order, an error line for a bad one, and exits 1', () => {
+    const { status, stdout } = run('--json', 'Fe XIV', 'Fe99+', 'O-', 'U91+')
+    const lines = stdout.trimEnd().split('\n')
+    expect(lines).toHaveLength(4)
+    const [fe, bad, o, u] = lines.map((l) => JSON.parse(l))
+    expect(fe).toMatchObject({ input: 'Fe XIV', z: 26, charge: 13, configuration: '1s2 2s2 2p6 3s2 3p1', term: '2P°1/2' })
+    expect(Object.keys(bad)).toEqual(['input', 'error'])
+    expect(bad.input).toBe('Fe99+')
+    expect(bad.error).toMatch(/beyond the bare nucleus.*Accepted notations/)
+    expect(o).toMatchObject({ input: 'O-', charge: -1 })
+    expect(u.ionisationEnergy.estimates.map((e: { method: string }) => e.method)).toContain('dirac-hydrogen-like')
+    expect(status).toBe(1)
+  }, 60_000)
+
+  it('exits 0 when every argument is good, and keeps to the methods asked for', () => {
+    const { status, stdout } = run('--json', '--methods', 'slater-hydrogenic', 'Fe', '56Fe25+')
+    expect(status).toBe(0)
+    for (const line of stdout.trimEnd().split('\n')) {
+      expect(JSON.parse(line).ionisationEnergy.estimates.map((e: { method: string }) => e.method)).toEqual(['slater-hydrogenic'])
+    }
+  }, 60_000)
+
+  it('refuses an unknown method before printing anything, naming the known ones', () => {
+    const { status, stdout, stderr } = run('--json', '--methods', 'slater-hydrogenic,guesswork', 'Fe')
+    expect(status).toBe(2)
+    expect(stdout).toBe('')
+    expect(stderr).toMatch(/unknown method 'guesswork'; known: slater-hydrogenic, slater-total-energy, dirac-hydrogen-like, scf-delta, scf-eigenvalue/)
+  }, 60_000)
+
+  it('prints readable text by default', () => {
+    const { status, stdout } = run('Fe XIV')
+    expect(status).toBe(0)
+    expect(stdout).toMatch(/^Fe XIV = Fe13\+/)
+    expect(stdout).toMatch(/\[Ne\] 3s2 3p1/)
+    expect(stdout).toMatch(/2P°1\/2/)
+    expect(stdout).toMatch(/production threshold\s+361/)
+  }, 60_000)
+})
