@@ -97,6 +97,21 @@ export function runScf(z: number, subshells: SubshellOccupation[], options: ScfO
   const mixer = andersonMixer(weights, MIX_BETA, MIX_DEPTH)
   const field = createField(z, grid, channels, functional)
 
+  // Orbitals of every channel in the given potentials, or the first failure.
+  const solveAll = (potentials: Float64Array[], tol: number): { solutions: ChannelSolution[]; xOut: Float64Array } | string => {
+    const xOut = new Float64Array(count * size)
+    const found: ChannelSolution[] = []
+    for (let c = 0; c < count; c++) {
+      const ch = channels[c]
+      const s = solveBoundState(grid, potentials[c], z, ch.n, ch.l, energies[c], rws, tol)
+      if (typeof s === 'string') return s
+      energies[c] = s.energy
+      found.push({ channel: ch, energy: s.energy, p: s.p })
+      for (let i = 0; i < size; i++) xOut[c * size + i] = ch.occupation * s.p[i] * s.p[i]
+    }
+    return { solutions: found, xOut }
+  }
+
   let solutions: ChannelSolution[] = []
   let best = Infinity
   let worse = 0
@@ -107,32 +122,32 @@ export function runScf(z: number, subshells: SubshellOccupation[], options: ScfO
   let eigenTolerance = 1e-8
   for (let iteration = 1; iteration <= maxIterations; iteration++) {
     field.build(xIn)
-    const xOut = new Float64Array(count * size)
-    solutions = []
-    let unbound: string | null = null
-    for (let c = 0; c < count && !unbound; c++) {
-      const ch = channels[c]
-      const s = solveBoundState(grid, field.potentials[c], z, ch.n, ch.l, energies[c], rws, eigenTolerance)
-      if (typeof s === 'string') {
-        unbound = s
-        break
-      }
-      energies[c] = s.energy
-      solutions.push({ channel: ch, energy: s.energy, p: s.p })
-      for (let i = 0; i < size; i++) xOut[c * size + i] = ch.occupation * s.p[i] * s.p[i]
-    }
-    if (unbound) {
-      // An extrapolated density can push a weakly bound orbital out of the atom; step back to a
-      // short linear step from the last good iteration before giving up.
-      if (!lastGood || backoffs >= MAX_BACKOFFS) return fail(iteration, unbound)
-      lastUnbound = unbound
+    const solved = solveAll(field.potentials, eigenTolerance)
+    if (typeof solved === 'string') {
+      if (backoffs >= MAX_BACKOFFS) return fail(iteration, solved)
+      lastUnbound = solved
       backoffs++
       mixer.reset()
-      const { x, out } = lastGood
-      const step = 0.3 / backoffs
-      xIn = clipAndNormalise(x.map((v, k) => v + step * (out[k] - v)), channels, grid)
+      if (lastGood) {
+        // An extrapolated density can push a weakly bound orbital out of the atom: take a short
+        // linear step from the last good iteration instead.
+        const { x, out } = lastGood
+        const step = 0.3 / backoffs
+        xIn = clipAndNormalise(x.map((v, k) => v + step * (out[k] - v)), channels, grid)
+        continue
+      }
+      // The first field may not bind a shallow orbital (a 4f without a Coulomb tail): solve once
+      // in a blend with the starting potential, whose tail binds everything, and start from that.
+      v0 ??= startingPotential(grid, z, electrons)
+      const start = v0
+      const blend = 0.5 ** backoffs
+      const blended = field.potentials.map((v) => v.map((vi, i) => start[i] + blend * (vi - start[i])))
+      const retry = solveAll(blended, eigenTolerance)
+      if (typeof retry !== 'string') xIn = retry.xOut
       continue
     }
+    solutions = solved.solutions
+    const xOut = solved.xOut
     lastGood = { x: xIn, out: xOut }
     let residual = 0
     for (let k = 0; k < xOut.length; k++) residual += weights[k] * Math.abs(xOut[k] - xIn[k])
@@ -155,7 +170,8 @@ export function runScf(z: number, subshells: SubshellOccupation[], options: ScfO
     xIn = clipAndNormalise(mixer.next(xIn, xOut), channels, grid)
     if (iteration === maxIterations) {
       const perElectron = (residual / electrons).toExponential(1)
-      return fail(iteration, `not self-consistent after ${iteration} iterations (residual ${perElectron} per electron)`, solutions)
+      const plural = iteration === 1 ? '' : 's'
+      return fail(iteration, `not self-consistent after ${iteration} iteration${plural} (residual ${perElectron} per electron)`, solutions)
     }
   }
   return fail(maxIterations, `not self-consistent after ${maxIterations} iterations, the last ended by: ${lastUnbound}`)
