@@ -11,16 +11,17 @@
  * Everything here is a pure function of its arguments: no module state, no I/O, results are plain
  * JSON (a failed solve has totalEnergyHartree NaN, which JSON writes as null, and a failure reason).
  */
+import { groundConfiguration } from '../configuration'
 import type { SubshellOccupation } from './channels'
 import { METHOD_NAMES, type ScfOptions } from './options'
 import { toResult } from './result'
 import { runScf } from './scf'
-import { speciesEstimates, type ConfigurationSource } from './species'
+import { speciesEstimates, type ScfSpeciesOptions } from './species'
 import type { ScfResult, ScfSpeciesEstimates } from './types'
 
 export type { ScfOrbital, ScfRadialDensity, ScfResult, ScfSpeciesEstimates } from './types'
 export type { ScfFunctional, ScfOptions } from './options'
-export type { ConfigurationSource } from './species'
+export type { ConfigurationSource, ScfSpeciesOptions } from './species'
 export { HARTREE_EV } from './species'
 
 /** The production method's name as shown to users. */
@@ -31,11 +32,10 @@ export function solveConfiguration(z: number, subshells: SubshellOccupation[], o
   return toResult(runScf(z, subshells, options), options.densityPoints ?? 80)
 }
 
-/** ΔSCF (E(next ion) − E(species)) and eigenvalue ionisation energies of (z, charge), configurations from configurationOf. */
-export function solveSpeciesScf(
-  z: number,
-  charge: number,
-  options: ScfOptions & { configurationOf: ConfigurationSource },
-): ScfSpeciesEstimates {
-  return speciesEstimates(z, charge, options.configurationOf, options)
+/**
+ * ΔSCF (E(next ion) − E(species)) and eigenvalue ionisation energies of (z, charge); ground
+ * configurations from the engine's groundConfiguration unless options.configurationOf is given.
+ */
+export function solveSpeciesScf(z: number, charge: number, options: ScfSpeciesOptions = {}): ScfSpeciesEstimates {
+  return speciesEstimates(z, charge, options.configurationOf ?? groundConfiguration, options)
 }

@@ -15,6 +15,11 @@ export const HARTREE_EV = 27.211386245988
 /** Where the ground configuration of (z, charge) comes from. */
 export type ConfigurationSource = (z: number, charge: number) => { subshells: SubshellOccupation[] }
 
+/** Options of solveSpeciesScf: the solver's, and the configuration source (default: the engine's ground configurations). */
+export interface ScfSpeciesOptions extends ScfOptions {
+  configurationOf?: ConfigurationSource
+}
+
 /** The highest occupied orbital eigenvalue of a converged run, spin resolved, hartree. */
 function highestOccupied(run: ScfRun): number | null {
   if (!run.converged || run.solutions.length === 0) return null
