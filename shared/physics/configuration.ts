@@ -83,21 +83,38 @@ function neutralCore(z: number, neutral: readonly Subshell[]): Subshell[] {
 
 const highestFirst = (a: Subshell, b: Subshell) => b.n - a.n || b.l - a.l
 
+// The order the removal rule empties the neutral's subshells in, as indices into them; one
+// list per element, so each ion only has to count electrons off it.
+const removalOrders = new Map<number, number[]>()
+
+function removalOrder(z: number, neutral: readonly Subshell[]): number[] {
+  let order = removalOrders.get(z)
+  if (!order) {
+    const core = neutralCore(z, neutral)
+    const inCore = (s: Subshell) => core.some((c) => c.n === s.n && c.l === s.l)
+    const indexed = neutral.map((s, i) => ({ s, i }))
+    const byRule = (a: { s: Subshell }, b: { s: Subshell }) => highestFirst(a.s, b.s)
+    // Valence electrons (outside the neutral's core) first, then the core, each highest n then l.
+    order = [...indexed.filter((x) => !inCore(x.s)).sort(byRule), ...indexed.filter((x) => inCore(x.s)).sort(byRule)].map(
+      (x) => x.i,
+    )
+    removalOrders.set(z, order)
+  }
+  return order
+}
+
 function removeElectrons(z: number, neutral: readonly Subshell[], count: number): Subshell[] {
   const work = neutral.map((s) => ({ ...s }))
-  const core = neutralCore(z, neutral)
-  const inCore = (s: Subshell) => core.some((c) => c.n === s.n && c.l === s.l)
-  // Valence electrons (outside the neutral's core) first, then the core, each highest n then l.
-  const order = [...work.filter((s) => !inCore(s)).sort(highestFirst), ...work.filter(inCore).sort(highestFirst)]
   let left = count
-  for (const s of order) {
-    const k = Math.min(left, s.electrons)
-    s.electrons -= k
+  for (const i of removalOrder(z, neutral)) {
+    const k = Math.min(left, work[i].electrons)
+    work[i].electrons -= k
     left -= k
     if (left === 0) break
   }
   if (left > 0) throw new RangeError('no electron left to remove')
-  return canonical(work)
+  // The neutral is in canonical order and taking electrons away keeps it so.
+  return work.filter((s) => s.electrons > 0)
 }
 
 function addMadelungElectron(start: readonly Subshell[]): Subshell[] {
@@ -141,6 +158,21 @@ function neutralSubshells(z: number): Neutral {
   return hit
 }
 
+// One shared fill per electron count: every element's ions with that many electrons use it.
+const hydrogenicFills = new Map<number, Subshell[]>()
+function hydrogenicFill(electrons: number): Subshell[] {
+  let hit = hydrogenicFills.get(electrons)
+  if (!hit) {
+    hit = fillInOrder(electrons, HYDROGENIC_ORDER)
+    hydrogenicFills.set(electrons, hit)
+  }
+  return hit
+}
+
+// The text forms of shared subshell arrays (the hydrogenic fills), written once.
+const formatted = new WeakMap<readonly Subshell[], { text: string; core: string }>()
+
+// Cached entries are never changed after this, so entries may share subshell arrays.
 function compute(z: number, charge: number): GroundConfiguration {
   const electrons = z - charge
   const entry = TABLE.get(key(z, charge))
@@ -163,19 +195,24 @@ function compute(z: number, charge: number): GroundConfiguration {
     subshells = []
     rule = 'bare-nucleus'
   } else if (charge >= electrons) {
-    subshells = fillInOrder(electrons, HYDROGENIC_ORDER)
+    subshells = hydrogenicFill(electrons)
     rule = 'hydrogenic-order'
   } else {
     subshells = removeElectrons(z, neutralSubshells(z).subshells, charge)
     rule = 'removal-rule'
+  }
+  let texts = formatted.get(subshells)
+  if (!texts) {
+    texts = { text: formatConfiguration(subshells), core: formatWithCore(subshells) }
+    formatted.set(subshells, texts)
   }
   return {
     z,
     charge,
     electrons,
     subshells,
-    text: formatConfiguration(subshells),
-    core: formatWithCore(subshells),
+    text: texts.text,
+    core: texts.core,
     isoelectronic: electrons >= 1 && electrons <= MAX_Z ? `${symbolOf(electrons)}-like` : null,
     rule,
     source,
@@ -195,6 +232,11 @@ function cached(z: number, charge: number): GroundConfiguration {
     cache.set(k, hit)
   }
   return hit
+}
+
+/** The same as groundConfiguration but shared, not copied: for callers that only read it. */
+export function readGroundConfiguration(z: number, charge: number): Readonly<GroundConfiguration> {
+  return cached(z, charge)
 }
 
 /** Ground configuration of element z with the given charge (−1 ≤ charge ≤ z); throws outside that. */

@@ -55,6 +55,8 @@ interface Tally {
 const tallies = new Map<string, Tally>()
 
 function subshellTally(l: number, k: number): Tally {
+  // A subshell with k electrons has the terms of one with k holes (common practice, no source).
+  if (2 * k > capacity(l)) return subshellTally(l, capacity(l) - k)
   const key = `${l}.${k}`
   const hit = tallies.get(key)
   if (hit) return hit
@@ -62,23 +64,24 @@ function subshellTally(l: number, k: number): Tally {
   const maxS2 = k
   const width = 2 * maxS2 + 1
   const size = (2 * maxL + 1) * width
-  // dp[j] tallies the ways to pick j spin-orbitals so far, by (ML, 2MS) in one flat array.
-  let dp = Array.from({ length: k + 1 }, () => new Float64Array(size))
-  dp[0][maxL * width + maxS2] = 1
+  // layers[j] tallies the ways to pick j spin-orbitals so far, by (ML, 2MS) in one flat array;
+  // going through j downwards lets each spin-orbital be added in place, at most once.
+  const layers = Array.from({ length: k + 1 }, () => new Float64Array(size))
+  layers[0][maxL * width + maxS2] = 1
   for (let ml = -l; ml <= l; ml++) {
     for (const s2 of [1, -1]) {
-      const next = dp.map((a) => a.slice())
       const shift = ml * width + s2
-      for (let j = 0; j < k; j++) {
-        const from = dp[j]
-        const to = next[j + 1]
-        for (let c = 0; c < size; c++) if (from[c] !== 0) to[c + shift] += from[c]
+      for (let j = k - 1; j >= 0; j--) {
+        const from = layers[j]
+        const to = layers[j + 1]
+        const lo = Math.max(0, -shift)
+        const hi = Math.min(size, size - shift)
+        for (let c = lo; c < hi; c++) if (from[c] !== 0) to[c + shift] += from[c]
       }
-      dp = next
     }
   }
   const cells: number[][] = []
-  for (let i = 0; i <= 2 * maxL; i++) cells.push(Array.from(dp[k].subarray(i * width, (i + 1) * width)))
+  for (let i = 0; i <= 2 * maxL; i++) cells.push(Array.from(layers[k].subarray(i * width, (i + 1) * width)))
   const tally = { maxL, maxS2, cells }
   tallies.set(key, tally)
   return tally

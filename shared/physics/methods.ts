@@ -61,10 +61,14 @@ export const CODATA_2018 = {
   atomicMassUnitEv: 931494102.42,
 } as const
 
+/** The hydrogen-like energy 13.6057 eV · (Z_eff / n*)² of one electron. */
+export function hydrogenicEv(zEff: number, effectiveN: number): number {
+  return SLATER_RYDBERG_EV * (zEff / effectiveN) ** 2
+}
+
 /** slater-hydrogenic: 13.6057 eV · (Z_eff / n*)² for one electron of `from` in the configuration. */
 export function slaterHydrogenicEv(z: number, subshells: readonly Subshell[], from: { n: number; l: number }): number {
-  const zEff = z - screeningConstant(subshells, from)
-  return SLATER_RYDBERG_EV * (zEff / nStar(from.n)) ** 2
+  return hydrogenicEv(z - screeningConstant(subshells, from), nStar(from.n))
 }
 
 /** slater-total-energy: E_Slater(next ion) − E_Slater(species), in eV. */

@@ -43,11 +43,25 @@ export function electronCount(subshells: readonly Subshell[]): number {
   return subshells.reduce((sum, s) => sum + s.electrons, 0)
 }
 
+// Labels by n * 8 + l, built once: formatting runs for every species of a full listing.
+const LABELS: string[] = []
+for (let n = 1; n <= 9; n++) for (let l = 0; l < SUBSHELL_LETTERS.length; l++) LABELS[n * 8 + l] = `${n}${SUBSHELL_LETTERS[l]}`
+
+function isCanonical(subshells: readonly Subshell[]): boolean {
+  for (let i = 0; i < subshells.length; i++) {
+    const s = subshells[i]
+    const prev = subshells[i - 1]
+    if (s.electrons <= 0 || (prev && (prev.n > s.n || (prev.n === s.n && prev.l >= s.l)))) return false
+  }
+  return true
+}
+
 /** '1s2 2s2 2p6 3s2 3p1' (every occupied subshell with its count, even 1). */
 export function formatConfiguration(subshells: readonly Subshell[]): string {
-  return canonical(subshells)
-    .map((s) => `${subshellLabel(s.n, s.l)}${s.electrons}`)
-    .join(' ')
+  const list = isCanonical(subshells) ? subshells : canonical(subshells)
+  let out = ''
+  for (const s of list) out += `${out ? ' ' : ''}${LABELS[s.n * 8 + s.l] ?? subshellLabel(s.n, s.l)}${s.electrons}`
+  return out
 }
 
 /**
@@ -89,13 +103,21 @@ export const NOBLE_GASES: readonly { symbol: string; electrons: number }[] = [
   { symbol: 'Rn', electrons: 86 },
   { symbol: 'Og', electrons: 118 },
 ]
-const CORES = NOBLE_GASES.map((g) => ({ ...g, subshells: fillInOrder(g.electrons, MADELUNG_ORDER) }))
+const CORES = NOBLE_GASES.map((g) => {
+  const subshells = fillInOrder(g.electrons, MADELUNG_ORDER)
+  // Electrons each core holds by n * 8 + l, for look-ups without searching.
+  const full = new Uint8Array(80)
+  for (const c of subshells) full[c.n * 8 + c.l] = c.electrons
+  return { ...g, subshells, full }
+})
 
-// Occupancy by n * 8 + l, so that "is this core inside?" is a look-up rather than a search.
-function occupancy(subshells: readonly Subshell[]): Uint8Array {
-  const occ = new Uint8Array(80)
-  for (const s of subshells) occ[s.n * 8 + s.l] += s.electrons
-  return occ
+function coreInside(core: (typeof CORES)[number], subshells: readonly Subshell[]): boolean {
+  let matched = 0
+  for (const s of subshells) {
+    const need = core.full[s.n * 8 + s.l]
+    if (need > 0 && s.electrons >= need) matched++
+  }
+  return matched === core.subshells.length
 }
 
 /** The largest closed-shell core wholly inside the configuration and smaller than it, if any. */
@@ -103,10 +125,9 @@ export function largestCore(
   subshells: readonly Subshell[],
 ): { symbol: string; electrons: number; subshells: readonly Subshell[] } | null {
   const total = electronCount(subshells)
-  const occ = occupancy(subshells)
   for (let i = CORES.length - 1; i >= 0; i--) {
     const core = CORES[i]
-    if (core.electrons < total && core.subshells.every((c) => occ[c.n * 8 + c.l] >= c.electrons)) return core
+    if (core.electrons < total && coreInside(core, subshells)) return core
   }
   return null
 }
@@ -117,10 +138,14 @@ export function largestCore(
  * and a bare nucleus gives ''.
  */
 export function formatWithCore(subshells: readonly Subshell[]): string {
-  const core = largestCore(subshells)
-  if (!core) return formatConfiguration(subshells)
-  const rest = canonical(subshells).filter((s) => !core.subshells.some((c) => c.n === s.n && c.l === s.l))
-  return [`[${core.symbol}]`, formatConfiguration(rest)].filter((t) => t.length > 0).join(' ')
+  const list = isCanonical(subshells) ? subshells : canonical(subshells)
+  const total = electronCount(list)
+  let core: (typeof CORES)[number] | null = null
+  for (let i = CORES.length - 1; i >= 0 && !core; i--) if (CORES[i].electrons < total && coreInside(CORES[i], list)) core = CORES[i]
+  if (!core) return formatConfiguration(list)
+  let out = `[${core.symbol}]`
+  for (const s of list) if (core.full[s.n * 8 + s.l] === 0) out += ` ${LABELS[s.n * 8 + s.l]}${s.electrons}`
+  return out
 }
 
 /** Parses '1s2 2s2 2p1', '[Ar] 3d6 4s2' or '4f 5d2' (a missing count means 1). */

@@ -49,14 +49,17 @@ interface ShellSpin {
   L: number
 }
 
+// Boxes fill from m_l = +l downwards, so `count` electrons of one spin sum to this M_L.
+function mlSum(l: number, count: number): number {
+  return count * l - (count * (count - 1)) / 2
+}
+
 /** Hund's S and L of one subshell: unpaired spins, and the M_L sum of the filled boxes. */
 function hundShell(l: number, k: number): ShellSpin {
   const orbitals = 2 * l + 1
   const up = Math.min(k, orbitals)
   const down = k - up
-  // Boxes fill from m_l = +l downwards, so the M_L sum is that of the first `up` and `down` values.
-  const mlSum = (count: number) => count * l - (count * (count - 1)) / 2
-  return { l, electrons: k, S: (up - down) / 2, L: mlSum(up) + mlSum(down) }
+  return { l, electrons: k, S: (up - down) / 2, L: mlSum(l, up) + mlSum(l, down) }
 }
 
 const tableTerms = new Map(NON_HUND_TERMS.map((e) => [`${e.z}:${e.charge}`, e]))

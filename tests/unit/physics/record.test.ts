@@ -162,3 +162,23 @@ describe('every species from H to element 118, charge −1 to bare nucleus', () 
     expect(count).toBe(7021 + 2 * 118)
   })
 })
+
+describe('the record uses the methods as methods.ts defines them', () => {
+  it('for every species with electrons, Slater estimates equal the stand-alone functions', async () => {
+    const { slaterHydrogenicEv, slaterTotalEnergyEv } = await import('../../../shared/physics/methods')
+    const { groundConfiguration, nextElectronSubshell } = await import('../../../shared/physics/configuration')
+    for (let z = 1; z <= 118; z++) {
+      for (let charge = -1; charge < z; charge++) {
+        const r = describeSpecies({ input: '', z, symbol: '', charge, massNumber: null })
+        const shells = groundConfiguration(z, charge).subshells
+        const next = nextElectronSubshell(z, charge)
+        if (!next) throw new Error('no next electron')
+        const [hydrogenic, total] = r.ionisationEnergy.estimates
+        // The record rounds to nine significant figures.
+        const close = (a: number, b: number) => expect(Math.abs(a - b)).toBeLessThanOrEqual(1e-8 * Math.abs(b) + 1e-12)
+        close(hydrogenic.eV, slaterHydrogenicEv(z, shells, next))
+        close(total.eV, slaterTotalEnergyEv(z, shells, groundConfiguration(z, charge + 1).subshells))
+      }
+    }
+  })
+})

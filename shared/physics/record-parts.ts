@@ -1,0 +1,197 @@
+/**
+ * The parts of a species record that depend only on (Z, charge), computed once per species and
+ * frozen, so that describeSpecies — and a listing of all 7,139 species — only assembles them.
+ * Frozen parts are shared between records: a caller that wants to change one copies it first.
+ */
+import { nextElectronSubshell, readGroundConfiguration, type ConfigurationRule } from './configuration'
+import { getElement } from './elements'
+import { lsTerms } from './ls-terms'
+import { SLATER_RYDBERG_EV, hydrogenicEv, type MethodName } from './methods'
+import { formatSpecies } from './notation'
+import {
+  IONISATION_SOURCE,
+  type ElectronAffinity,
+  type ReferenceGroundLevel,
+  type SourcedValue,
+  electronAffinity,
+  referenceGroundLevel,
+  referenceIonisationEv,
+} from './reference'
+import { slaterScreening, type ScreeningRow } from './slater'
+import { type Subshell, capacity, subshellLabel } from './subshells'
+import { groundTerm, orbitalBoxes, unpairedElectrons, type SubshellBoxes } from './terms'
+
+export interface Estimate {
+  readonly method: MethodName
+  readonly eV: number
+  /** estimate − reference, where a reference exists */
+  readonly deviationEv?: number
+  readonly deviationPercent?: number
+  /** what the estimate assumed, where that matters (the isotope for the reduced mass) */
+  readonly basis?: string
+}
+
+/** One distinct LS term of the configuration and how often it occurs. */
+export interface TermSummary {
+  readonly label: string
+  readonly count: number
+  readonly J: readonly string[]
+}
+
+export interface SpeciesBase {
+  symbol: string
+  name: string
+  electrons: number
+  configuration: string
+  core: string
+  term: string | null
+  isoelectronic: string | null
+  screening: readonly ScreeningRow[]
+  reference: Readonly<SourcedValue> | null
+  nextElectron: string | null
+  slaterHydrogenic: Estimate | null
+  slaterTotalEnergy: Estimate | null
+  productionThreshold: Readonly<SourcedValue & { from: string }> | null
+  productionThresholdNote: string | undefined
+  configurationRule: ConfigurationRule
+  configurationSource: string | null
+  termRule: 'hund' | 'table' | null
+  termSource: string | null
+  unpaired: number
+  orbitals: readonly SubshellBoxes[]
+  terms: readonly TermSummary[]
+  referenceGroundLevel: Readonly<ReferenceGroundLevel> | undefined
+  electronAffinity: Readonly<ElectronAffinity> | undefined
+  notations: Readonly<{ ionic: string; spectroscopic: string }>
+  caution: string
+}
+
+const CAUTION = 'Computed values are model estimates, not measurements; where a reference value is given, rely on it.'
+const ANION_CAUTION = ' The ground configuration of a negative ion is less certain than that of a positive ion.'
+const ANION_THRESHOLD =
+  'Negative ions are made by charge exchange or sputtering, not by electron-impact ionisation (common practice, no source).'
+
+/** Significant-figure rounding (toPrecision's string round trip was the slowest step of a listing). */
+export function round(x: number, digits: number): number {
+  if (x === 0 || !Number.isFinite(x)) return x
+  const scale = 10 ** (digits - 1 - Math.floor(Math.log10(Math.abs(x))))
+  return Math.round(x * scale) / scale
+}
+
+/** An estimate with its deviation from the reference (eV and percent) where there is one. */
+export function estimate(method: MethodName, eV: number, reference: number | null, basis?: string): Estimate {
+  const out: { -readonly [K in keyof Estimate]: Estimate[K] } = { method, eV: round(eV, 9) }
+  if (reference !== null) {
+    out.deviationEv = round(eV - reference, 6)
+    out.deviationPercent = round((100 * (eV - reference)) / reference, 4)
+  }
+  if (basis !== undefined) out.basis = basis
+  return out
+}
+
+const termCache = new Map<string, readonly TermSummary[]>()
+function termSummary(shells: readonly Subshell[]): readonly TermSummary[] {
+  if (shells.length === 0) return []
+  const open = shells.filter((s) => s.electrons < capacity(s.l))
+  const key = open.map((s) => `${s.l}.${s.electrons}`).join(' ') + (shells.reduce((sum, s) => sum + s.l * s.electrons, 0) % 2)
+  let hit = termCache.get(key)
+  if (!hit) {
+    hit = Object.freeze(lsTerms(shells).map((t) => Object.freeze({ label: t.label, count: t.count, J: Object.freeze(t.J) })))
+    termCache.set(key, hit)
+  }
+  return hit
+}
+
+// Slater rows and total energy (−Σ N_i (Z_eff,i / n*_i)², as slater.ts's slaterTotalEnergyRydberg,
+// taken from the rows) per species; the next ion's energy is needed too, so each is made once.
+interface SlaterEntry {
+  rows: readonly ScreeningRow[]
+  energyRydberg: number
+}
+const slaterCache = new Map<number, SlaterEntry>()
+function slater(z: number, charge: number): SlaterEntry {
+  const key = z * 128 + charge + 1
+  let hit = slaterCache.get(key)
+  if (hit === undefined) {
+    const shells = readGroundConfiguration(z, charge).subshells
+    const rows = slaterScreening(z, shells)
+    let sum = 0
+    for (let i = 0; i < rows.length; i++) sum += shells[i].electrons * (rows[i].zEff / rows[i].nStar) ** 2
+    hit = { rows: Object.freeze(rows.map((r) => Object.freeze(r))), energyRydberg: -sum }
+    slaterCache.set(key, hit)
+  }
+  return hit
+}
+
+function compute(z: number, charge: number): SpeciesBase {
+  const element = getElement(z)
+  if (!element) throw new RangeError(`no element with Z = ${z}`)
+  const config = readGroundConfiguration(z, charge)
+  const shells = config.subshells
+  const term = groundTerm(shells, z, charge)
+  const next = nextElectronSubshell(z, charge)
+  const ea = charge === -1 ? Object.freeze(electronAffinity(z)) : undefined
+  const referenceEv = charge === -1 ? (ea?.bound ? ea.eV : null) : referenceIonisationEv(z, charge)
+  const reference =
+    referenceEv === null ? null : Object.freeze({ eV: referenceEv, source: ea?.source ?? IONISATION_SOURCE })
+  const own = slater(z, charge)
+  let slaterHydrogenic: Estimate | null = null
+  let slaterTotalEnergy: Estimate | null = null
+  if (next) {
+    const row = own.rows[shells.findIndex((s) => s.n === next.n && s.l === next.l)]
+    slaterHydrogenic = Object.freeze(estimate('slater-hydrogenic', hydrogenicEv(row.zEff, row.nStar), referenceEv))
+    const total = SLATER_RYDBERG_EV * (slater(z, charge + 1).energyRydberg - own.energyRydberg)
+    slaterTotalEnergy = Object.freeze(estimate('slater-total-energy', total, referenceEv))
+  }
+  let productionThreshold: SpeciesBase['productionThreshold'] = null
+  let productionThresholdNote: string | undefined
+  if (charge === -1) productionThresholdNote = ANION_THRESHOLD
+  else if (charge === 0) productionThresholdNote = 'A neutral atom is not made by ionisation.'
+  else {
+    const below = referenceIonisationEv(z, charge - 1)
+    const from = formatSpecies(z, charge - 1).ionic
+    if (below === null) productionThresholdNote = `No reference ionisation energy for ${from}.`
+    else productionThreshold = Object.freeze({ eV: below, source: IONISATION_SOURCE, from })
+  }
+  const level = charge === 0 ? referenceGroundLevel(z) : null
+  return Object.freeze({
+    symbol: element.symbol,
+    name: element.name,
+    electrons: config.electrons,
+    configuration: config.text,
+    core: config.core,
+    term: term?.level ?? null,
+    isoelectronic: config.isoelectronic,
+    screening: own.rows,
+    reference,
+    nextElectron: next ? subshellLabel(next.n, next.l) : null,
+    slaterHydrogenic,
+    slaterTotalEnergy,
+    productionThreshold,
+    productionThresholdNote,
+    configurationRule: config.rule,
+    configurationSource: config.source,
+    termRule: term?.rule ?? null,
+    termSource: term?.source ?? null,
+    unpaired: unpairedElectrons(shells),
+    orbitals: Object.freeze(orbitalBoxes(shells)),
+    terms: termSummary(shells),
+    referenceGroundLevel: level ? Object.freeze(level) : undefined,
+    electronAffinity: ea,
+    notations: Object.freeze(formatSpecies(z, charge)),
+    caution: charge === -1 ? CAUTION + ANION_CAUTION : CAUTION,
+  })
+}
+
+const bases = new Map<number, SpeciesBase>()
+
+/** The frozen (Z, charge) part of the record; throws for a species that cannot exist. */
+export function speciesBase(z: number, charge: number): SpeciesBase {
+  const key = z * 128 + charge + 1
+  let hit = bases.get(key)
+  if (!hit) {
+    hit = compute(z, charge)
+    bases.set(key, hit)
+  }
+  return hit
+}
