@@ -20,19 +20,12 @@
  * Anions (charge −1): the neutral configuration plus one electron in the first subshell in
  * Madelung order that has room, except the anions tabulated in data/irregular.ts.
  */
-import { IRREGULAR_ANIONS, IRREGULAR_IONS, IRREGULAR_NEUTRALS } from './data/irregular'
+import { IRREGULAR_ANIONS, IRREGULAR_IONS } from './data/irregular'
 import { MAX_Z, symbolOf } from './elements'
-import {
-  MADELUNG_ORDER,
-  type Subshell,
-  canonical,
-  capacity,
-  fillInOrder,
-  formatConfiguration,
-  formatWithCore,
-  largestCore,
-  parseConfiguration,
-} from './subshells'
+import { addMadelungElectron, highestFirst, hydrogenicFill, neutralSubshells, removeElectrons } from './filling'
+import { type Subshell, formatConfiguration, formatWithCore, parseConfiguration } from './subshells'
+
+export { removalRuleConfiguration } from './filling'
 
 export type ConfigurationRule =
   | 'madelung'
@@ -62,109 +55,27 @@ export interface GroundConfiguration {
   source: string | null
 }
 
-const HYDROGENIC_ORDER: readonly (readonly [number, number])[] = [1, 2, 3, 4, 5, 6, 7, 8].flatMap((n) =>
-  Array.from({ length: Math.min(n, 4) }, (_, l) => [n, l] as const),
-)
+const TABLE = new Map([...IRREGULAR_IONS, ...IRREGULAR_ANIONS].map((e) => [`${e.z}:${e.charge}`, e]))
 
-const key = (z: number, charge: number) => `${z}:${charge}`
-const TABLE = new Map(
-  [...IRREGULAR_NEUTRALS, ...IRREGULAR_IONS, ...IRREGULAR_ANIONS].map((e) => [key(e.z, e.charge), e]),
-)
-
-// From tungsten on, the closed 4f shell lies below 5s and 5p in the ions (Pm-like W¹³⁺ is
-// 4f14 5s, from memory), so it joins the core; before it (Yb³⁺ 4f13, NIST Yb IV, from memory)
-// it still gives up electrons first. 5f from Z = 106 on by analogy, with no data to check.
-function neutralCore(z: number, neutral: readonly Subshell[]): Subshell[] {
-  const core = [...(largestCore(neutral)?.subshells ?? [])]
-  if (z >= 74) core.push({ n: 4, l: 3, electrons: 14 })
-  if (z >= 106) core.push({ n: 5, l: 3, electrons: 14 })
-  return core
-}
-
-const highestFirst = (a: Subshell, b: Subshell) => b.n - a.n || b.l - a.l
-
-// The order the removal rule empties the neutral's subshells in, as indices into them; one
-// list per element, so each ion only has to count electrons off it.
-const removalOrders = new Map<number, number[]>()
-
-function removalOrder(z: number, neutral: readonly Subshell[]): number[] {
-  let order = removalOrders.get(z)
-  if (!order) {
-    const core = neutralCore(z, neutral)
-    const inCore = (s: Subshell) => core.some((c) => c.n === s.n && c.l === s.l)
-    const indexed = neutral.map((s, i) => ({ s, i }))
-    const byRule = (a: { s: Subshell }, b: { s: Subshell }) => highestFirst(a.s, b.s)
-    // Valence electrons (outside the neutral's core) first, then the core, each highest n then l.
-    order = [...indexed.filter((x) => !inCore(x.s)).sort(byRule), ...indexed.filter((x) => inCore(x.s)).sort(byRule)].map(
-      (x) => x.i,
-    )
-    removalOrders.set(z, order)
-  }
-  return order
-}
-
-function removeElectrons(z: number, neutral: readonly Subshell[], count: number): Subshell[] {
-  const work = neutral.map((s) => ({ ...s }))
-  let left = count
-  for (const i of removalOrder(z, neutral)) {
-    const k = Math.min(left, work[i].electrons)
-    work[i].electrons -= k
-    left -= k
-    if (left === 0) break
-  }
-  if (left > 0) throw new RangeError('no electron left to remove')
-  // The neutral is in canonical order and taking electrons away keeps it so.
-  return work.filter((s) => s.electrons > 0)
-}
-
-function addMadelungElectron(start: readonly Subshell[]): Subshell[] {
-  const work = start.map((s) => ({ ...s }))
-  for (const [n, l] of MADELUNG_ORDER) {
-    const s = work.find((x) => x.n === n && x.l === l)
-    if (!s) {
-      work.push({ n, l, electrons: 1 })
-      return canonical(work)
-    }
-    if (s.electrons < capacity(l)) {
-      s.electrons += 1
-      return canonical(work)
-    }
-  }
-  throw new RangeError('no room for another electron')
-}
-
-/** The removal rule alone, from the neutral configuration (tables and the high-charge guard aside). */
-export function removalRuleConfiguration(z: number, charge: number): Subshell[] {
-  return removeElectrons(z, neutralSubshells(z).subshells, charge)
-}
-
-interface Neutral {
-  subshells: Subshell[]
-  rule: ConfigurationRule
-  source: string | null
-}
-const neutrals = new Map<number, Neutral>()
-
-// Callers copy before changing anything: the result is shared.
-function neutralSubshells(z: number): Neutral {
-  let hit = neutrals.get(z)
+// One frozen object per (n, l, occupancy), shared by every cached configuration: a listing of
+// all species then holds arrays of a few hundred objects instead of a hundred thousand.
+const interned = new Map<number, Subshell>()
+function intern(s: Subshell): Subshell {
+  const key = (s.n * 8 + s.l) * 32 + s.electrons
+  let hit = interned.get(key)
   if (!hit) {
-    const entry = TABLE.get(key(z, 0))
-    hit = entry
-      ? { subshells: parseConfiguration(entry.configuration), rule: 'irregular-neutral', source: entry.source }
-      : { subshells: fillInOrder(z, MADELUNG_ORDER), rule: 'madelung', source: null }
-    neutrals.set(z, hit)
+    hit = Object.freeze({ n: s.n, l: s.l, electrons: s.electrons })
+    interned.set(key, hit)
   }
   return hit
 }
 
-// One shared fill per electron count: every element's ions with that many electrons use it.
-const hydrogenicFills = new Map<number, Subshell[]>()
-function hydrogenicFill(electrons: number): Subshell[] {
-  let hit = hydrogenicFills.get(electrons)
+const internedFills = new WeakMap<readonly Subshell[], Subshell[]>()
+function internedFill(fill: readonly Subshell[]): Subshell[] {
+  let hit = internedFills.get(fill)
   if (!hit) {
-    hit = fillInOrder(electrons, HYDROGENIC_ORDER)
-    hydrogenicFills.set(electrons, hit)
+    hit = fill.map(intern)
+    internedFills.set(fill, hit)
   }
   return hit
 }
@@ -175,18 +86,18 @@ const formatted = new WeakMap<readonly Subshell[], { text: string; core: string 
 // Cached entries are never changed after this, so entries may share subshell arrays.
 function compute(z: number, charge: number): GroundConfiguration {
   const electrons = z - charge
-  const entry = TABLE.get(key(z, charge))
-  let subshells: Subshell[]
+  const entry = TABLE.get(`${z}:${charge}`)
+  let subshells: readonly Subshell[]
   let rule: ConfigurationRule
   let source: string | null = null
-  if (entry && charge !== 0) {
+  if (entry) {
     subshells = parseConfiguration(entry.configuration)
     rule = charge < 0 ? 'irregular-anion' : 'irregular-ion'
     source = entry.source
   } else if (charge === 0) {
     const neutral = neutralSubshells(z)
-    subshells = neutral.subshells.map((x) => ({ ...x }))
-    rule = neutral.rule
+    subshells = neutral.subshells
+    rule = neutral.madelung ? 'madelung' : 'irregular-neutral'
     source = neutral.source
   } else if (charge < 0) {
     subshells = addMadelungElectron(neutralSubshells(z).subshells)
@@ -201,16 +112,18 @@ function compute(z: number, charge: number): GroundConfiguration {
     subshells = removeElectrons(z, neutralSubshells(z).subshells, charge)
     rule = 'removal-rule'
   }
-  let texts = formatted.get(subshells)
+  // Hydrogenic fills are shared between elements: intern each array once, so its text is cached.
+  const shared = rule === 'hydrogenic-order' ? internedFill(subshells) : subshells.map(intern)
+  let texts = formatted.get(shared)
   if (!texts) {
-    texts = { text: formatConfiguration(subshells), core: formatWithCore(subshells) }
-    formatted.set(subshells, texts)
+    texts = { text: formatConfiguration(shared), core: formatWithCore(shared) }
+    formatted.set(shared, texts)
   }
   return {
     z,
     charge,
     electrons,
-    subshells,
+    subshells: shared,
     text: texts.text,
     core: texts.core,
     isoelectronic: electrons >= 1 && electrons <= MAX_Z ? `${symbolOf(electrons)}-like` : null,
@@ -264,9 +177,4 @@ export function nextElectronSubshell(z: number, charge: number): Subshell | null
     }
   }
   return best ? { ...best } : null
-}
-
-/** Fills N electrons in hydrogenic (n, then l) order: the high-charge limit of a sequence. */
-export function hydrogenicOrderConfiguration(electrons: number): Subshell[] {
-  return fillInOrder(electrons, HYDROGENIC_ORDER)
 }
