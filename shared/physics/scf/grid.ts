@@ -2,9 +2,9 @@
  * The logarithmic radial grid r_i = exp(x0 + i·h) / Z and quadrature on it.
  *
  * A uniform mesh in x = ln(Z·r) puts as many points inside the 1s shell of uranium as in the
- * valence shell of hydrogen, which is why it has been the standard mesh for atomic structure since
- * F. Herman and S. Skillman, "Atomic Structure Calculations" (Prentice-Hall, 1963). Integrals are
- * done in x, where dr = r·dx.
+ * valence shell of hydrogen, the reason atomic structure codes use it (common practice, no source;
+ * F. Herman and S. Skillman, "Atomic Structure Calculations", Prentice-Hall 1963, used its
+ * piecewise-doubling forerunner). Integrals are done in x, where dr = r·dx.
  */
 
 export interface RadialGrid {
@@ -42,14 +42,6 @@ export function makeLogGrid(z: number, options: GridOptions = {}): RadialGrid {
     dr[i] = (simpson * h * r[i]) / 3
   }
   return { size, h, r, dr }
-}
-
-/** ∫ f(r) dr over the grid by Simpson's rule in x (f sampled on the grid). */
-export function integrate(grid: RadialGrid, f: ArrayLike<number>, end = grid.size): number {
-  let sum = 0
-  const dr = grid.dr
-  for (let i = 0; i < end; i++) sum += dr[i] * f[i]
-  return sum
 }
 
 /**

@@ -7,9 +7,10 @@
  * 84, 592, 1924) applies with its h⁴ local error. The eigenvalue is found by shooting: integrate out
  * from the nucleus and in from the far side to the outermost classical turning point, count the nodes
  * of the outward solution to bracket the state, and correct E to first order from the jump in slope
- * at the matching point (δE = y·Δy' / (2∫r²y² dx)), bisecting whenever the correction would leave
- * the bracket. This is the classic shooting procedure of D. R. Hartree, "The Calculation of Atomic
- * Structures" (Wiley, 1957), as used by Herman and Skillman (1963).
+ * at the matching point (δE = y·Δy' / (2∫r²y² dx), read off the Numerov residual there, the
+ * corrector of J. W. Cooley, Math. Comp. 15, 363, 1961), bisecting whenever the correction would
+ * leave the bracket: the shooting procedure of D. R. Hartree, "The Calculation of Atomic
+ * Structures" (Wiley, 1957).
  */
 import type { RadialGrid } from './grid'
 

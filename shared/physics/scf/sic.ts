@@ -38,8 +38,8 @@ export function selfInteraction(
 ): number {
   const size = grid.size
   const { p, vh, vxc } = ws
-  // Far out, where the orbital density is below 1e-20 per bohr, its Hartree potential is 1/r and its
-  // exchange–correlation potential below 1e-7 hartree: the correction stops there.
+  // Far out, where the orbital density is below 1e-20 of its peak, its Hartree potential is 1/r
+  // and its exchange–correlation potential below ~1e-7 hartree: the correction stops there.
   let end = 0
   let charge = 0
   let peak = 0

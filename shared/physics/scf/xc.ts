@@ -37,7 +37,7 @@ const PARA = vwnSet(0.0310907, -0.10498, 3.72744, 12.9352)
 const FERRO = vwnSet(0.01554535, -0.325, 7.06042, 18.0578)
 const STIFF = vwnSet(-1 / (6 * Math.PI * Math.PI), -0.0047584, 1.13107, 13.0045)
 
-/** The VWN interpolation G(x), x = √rs; writes rs·dG/drs into slot 1 of out. */
+/** The VWN interpolation G(x), x = √rs: writes G into out[slot] and rs·dG/drs into out[slot + 1]. */
 function vwnG(s: VwnSet, x: number, out: Float64Array, slot: number): void {
   const X = x * x + s.b * x + s.c
   const at = Math.atan(s.q / (2 * x + s.b))
