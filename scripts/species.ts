@@ -104,8 +104,17 @@ async function main(): Promise<void> {
     try {
       const parsed = parseSpecies(input)
       let scf: ScfSpeciesEstimates | null = null
-      if (solver && parsed.charge < parsed.z && methods.some((m) => scfNames.includes(m))) scf = solver(parsed.z, parsed.charge, { configurationOf: groundConfiguration })
+      let scfFailure: string | null = null
+      if (solver && parsed.charge < parsed.z && methods.some((m) => scfNames.includes(m))) {
+        // A solver that gives up on one species should not cost the user the rest of its record.
+        try {
+          scf = solver(parsed.z, parsed.charge, { configurationOf: groundConfiguration })
+        } catch (error) {
+          scfFailure = `SCF solver failed: ${(error as Error).message}`
+        }
+      }
       record = describeSpecies(parsed, { methods, scf })
+      if (scfFailure) record.ionisationEnergy.notes.push(scfFailure)
     } catch (error) {
       failed = true
       const message = error instanceof SpeciesParseError ? error.message : `could not describe this species: ${(error as Error).message}`
