@@ -12,9 +12,11 @@ const HYDROGENIC_ORDER: readonly (readonly [number, number])[] = [1, 2, 3, 4, 5,
 
 const NEUTRALS = new Map(IRREGULAR_NEUTRALS.map((e) => [e.z, e]))
 
-// From tungsten on, the closed 4f shell lies below 5s and 5p in the ions (Pm-like W¹³⁺ is
-// 4f14 5s, from memory), so it joins the core; before it (Yb³⁺ 4f13, NIST Yb IV, from memory)
-// it still gives up electrons first. 5f from Z = 106 on by analogy, with no data to check.
+// From tungsten on, the closed 4f shell lies below 5s and 5p in the ions, so it joins the core:
+// otherwise Ag-like W²⁷⁺ would come out 4d10 5s instead of its 4d10 4f (2F°5/2, from memory of
+// the tungsten spectroscopy done for fusion plasmas). Before tungsten the closed 4f still gives
+// up electrons first (Yb³⁺ is 4f13, NIST Yb IV, from memory). 5f joins the core from Z = 106 on
+// by analogy, with no data to check it against.
 function neutralCore(z: number, neutral: readonly Subshell[]): Subshell[] {
   const core = [...(largestCore(neutral)?.subshells ?? [])]
   if (z >= 74) core.push({ n: 4, l: 3, electrons: 14 })
