@@ -29,6 +29,7 @@ export {
   referenceIonisationSeries,
   referenceGroundLevel,
 } from './reference'
-export type { DescribeOptions, Estimate, SpeciesRecord } from './record'
+export type { DescribeOptions, Estimate, ScreeningEntry, SpeciesRecord, TermSummary } from './record'
+export type { ScfSpeciesEstimates } from './scf/types'
 export { describeSpecies } from './record'
 export { formatRecord } from './record-text'
