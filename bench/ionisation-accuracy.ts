@@ -29,6 +29,10 @@ interface Group {
 
 export const GROUPS: readonly Group[] = [
   { label: 'all (q ≥ 0)', test: (_, q) => q >= 0 },
+  { label: 'first IE, Z = 1–54', test: (z, q) => q === 0 && z <= 54 },
+  { label: 'all charge states, Z = 1–30', test: (z, q) => q >= 0 && z <= 30 },
+  { label: 'first IE, Z = 55–92', test: (z, q) => q === 0 && z >= 55 && z <= 92 },
+  { label: 'all charge states, Z = 55–92', test: (z, q) => q >= 0 && z >= 55 && z <= 92 },
   { label: 'neutral (q = 0)', test: (_, q) => q === 0 },
   { label: 'singly charged (q = 1)', test: (_, q) => q === 1 },
   { label: 'q = 2–4', test: (_, q) => q >= 2 && q <= 4 },
@@ -112,4 +116,37 @@ export function runAccuracyBench(out: (line: string) => void = (l) => process.st
   return results
 }
 
-if (import.meta.url === pathToFileURL(process.argv[1] ?? '').href) runAccuracyBench()
+/**
+ * Solves every species with a reference value in worker threads (about a minute on two cores)
+ * and adds the scf-delta and scf-eigenvalue rows.
+ */
+async function addScfProviders(workers: number): Promise<void> {
+  const { Piscina } = await import('piscina')
+  const pool = new Piscina({ filename: new URL('../server/workers/scf.ts', import.meta.url).href, execArgv: ['--import', 'tsx'], minThreads: workers, maxThreads: workers })
+  const delta = new Map<string, number | null>()
+  const eigen = new Map<string, number | null>()
+  const jobs: Promise<void>[] = []
+  for (let z = 1; z <= 118; z++) {
+    for (let charge = 0; charge < z; charge++) {
+      if (referenceIonisationEv(z, charge) === null) continue
+      jobs.push(
+        pool.run({ z, charge }).then((r: { deltaEv: number | null; eigenvalueEv: number | null }) => {
+          delta.set(`${z}:${charge}`, r.deltaEv)
+          eigen.set(`${z}:${charge}`, r.eigenvalueEv)
+        }),
+      )
+    }
+  }
+  const started = performance.now()
+  await Promise.all(jobs)
+  await pool.destroy()
+  process.stdout.write(`(SCF: ${jobs.length} species solved in ${((performance.now() - started) / 1000).toFixed(0)} s with ${workers} workers)\n\n`)
+  addMethodProvider({ method: 'scf-delta', estimate: (z, q) => delta.get(`${z}:${q}`) ?? null })
+  addMethodProvider({ method: 'scf-eigenvalue', estimate: (z, q) => eigen.get(`${z}:${q}`) ?? null })
+}
+
+if (import.meta.url === pathToFileURL(process.argv[1] ?? '').href) {
+  // --no-scf leaves out the SCF methods (the closed-form table alone takes a second).
+  if (!process.argv.includes('--no-scf')) await addScfProviders(2)
+  runAccuracyBench()
+}

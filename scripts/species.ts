@@ -7,10 +7,13 @@
  * (DESIGN §5). A species that cannot be read gives {"input", "error"} in its place (text mode: a
  * line on stderr) and the exit status is 1 once everything else is printed; a bad option is
  * status 2 before anything is printed. --methods takes method names separated by commas, or
- * `all`. The SCF methods come from shared/physics/scf/index.ts and are loaded only when asked for.
+ * `all`; naming an SCF method solves it here. Without --methods the record has the fast methods
+ * and whatever SCF results the database cache holds (NUXT_DATABASE_URL), when it is reachable.
  */
-import { existsSync } from 'node:fs'
-import { fileURLToPath } from 'node:url'
+import knexFactory, { type Knex } from 'knex'
+import knexConfig from '../knex.config'
+import { readScfCache } from '../server/utils/scf-cache'
+import { solveSpeciesScf } from '../shared/physics/scf/index'
 import type { ScfSpeciesEstimates } from '../shared/physics/scf/types'
 import {
   ACCEPTED_NOTATIONS,
@@ -23,9 +26,6 @@ import {
   parseSpecies,
 } from '../shared/physics/index'
 import { formatRecord } from '../shared/physics/record-text'
-
-// The solver takes its configurations from this engine, so both agree on what is being solved.
-type Solver = (z: number, charge: number, options: { configurationOf: typeof groundConfiguration }) => ScfSpeciesEstimates
 
 const USAGE = `usage: npm run --silent species -- [--json] [--methods LIST] SPECIES...
   SPECIES   e.g. ${ACCEPTED_NOTATIONS.join(', ')}
@@ -75,45 +75,48 @@ function readArguments(argv: string[]): Options {
   return options
 }
 
-async function loadSolver(): Promise<Solver | null> {
-  const url = new URL('../shared/physics/scf/index.ts', import.meta.url)
-  if (!existsSync(fileURLToPath(url))) return null
-  const mod = (await import(url.href)) as { solveSpeciesScf?: Solver }
-  if (typeof mod.solveSpeciesScf !== 'function') fail('shared/physics/scf/index.ts does not export solveSpeciesScf')
-  return mod.solveSpeciesScf
+/** The cache, when a database answers within a moment; the command works without one. */
+async function openCache(): Promise<Knex | null> {
+  const quiet = () => {}
+  const db = knexFactory({ ...knexConfig, pool: { min: 0, max: 1 }, acquireConnectionTimeout: 1500, log: { warn: quiet, error: quiet, debug: quiet, deprecate: quiet } })
+  try {
+    await db.raw('select 1 from species_scf_cache limit 1')
+    return db
+  } catch {
+    await db.destroy()
+    return null
+  }
 }
 
 async function main(): Promise<void> {
   const options = readArguments(process.argv.slice(2))
   const scfNames = METHODS.filter((m) => m.scf).map((m) => m.name)
-  const wantsScf = options.all || (options.methods ?? []).some((m) => scfNames.includes(m))
-  const solver = wantsScf ? await loadSolver() : null
-  let methods: MethodName[]
-  if (options.all) {
-    methods = METHODS.filter((m) => !m.scf || solver).map((m) => m.name)
-    if (!solver) process.stderr.write(`species: ${scfNames.join(', ')} not available yet (no SCF solver in this checkout)\n`)
-  } else {
-    methods = options.methods ?? METHODS.filter((m) => !m.scf).map((m) => m.name)
-    if (wantsScf && !solver) fail(`${scfNames.join(', ')}: not available yet (the SCF solver, shared/physics/scf/index.ts, is not in this checkout)`)
-  }
+  const solveHere = options.all || (options.methods ?? []).some((m) => scfNames.includes(m))
+  const methods: MethodName[] = options.all ? METHODS.map((m) => m.name) : (options.methods ?? METHODS.map((m) => m.name))
+  const cache = options.methods === null && !options.all ? await openCache() : null
 
   let failed = false
   let printed = 0
   for (const input of options.species) {
-    let record: SpeciesRecord
+    let record: SpeciesRecord & { scfStatus: 'computed' | 'cached' | 'none' }
     try {
       const parsed = parseSpecies(input)
       let scf: ScfSpeciesEstimates | null = null
       let scfFailure: string | null = null
-      if (solver && parsed.charge < parsed.z && methods.some((m) => scfNames.includes(m))) {
+      let scfStatus: 'computed' | 'cached' | 'none' = 'none'
+      if (solveHere && parsed.charge < parsed.z && methods.some((m) => scfNames.includes(m))) {
         // A solver that gives up on one species should not cost the user the rest of its record.
         try {
-          scf = solver(parsed.z, parsed.charge, { configurationOf: groundConfiguration })
+          scf = solveSpeciesScf(parsed.z, parsed.charge, { configurationOf: groundConfiguration })
+          scfStatus = 'computed'
         } catch (error) {
           scfFailure = `SCF solver failed: ${(error as Error).message}`
         }
+      } else if (cache && parsed.charge < parsed.z) {
+        scf = await readScfCache(cache, parsed.z, parsed.charge)
+        if (scf) scfStatus = 'cached'
       }
-      record = describeSpecies(parsed, { methods, scf })
+      record = { ...describeSpecies(parsed, { methods, scf }), scfStatus }
       if (scfFailure) record.ionisationEnergy.notes.push(scfFailure)
     } catch (error) {
       failed = true
@@ -126,6 +129,7 @@ async function main(): Promise<void> {
     process.stdout.write(options.json ? `${JSON.stringify(record)}\n` : `${printed > 0 ? '\n' : ''}${formatRecord(record)}\n`)
     printed++
   }
+  await cache?.destroy()
   process.exitCode = failed ? 1 : 0
 }
 

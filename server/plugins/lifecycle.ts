@@ -12,7 +12,7 @@ export default defineNitroPlugin((nitroApp) => {
     }
   })
   nitroApp.hooks.hook('close', async () => {
-    await Promise.allSettled([closeDb(), closeLucia()])
+    await Promise.allSettled([closeScfPool(), closeDb(), closeLucia()])
     closeMailer()
   })
 })

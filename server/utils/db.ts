@@ -1,5 +1,5 @@
 import knexFactory, { type Knex } from 'knex'
-import type { AuditRow, InvitationRow, SessionRow, SignInFailureRow, UserRow } from '#shared/types/db'
+import type { AuditRow, InvitationRow, ScfCacheRow, SessionRow, SignInFailureRow, UserRow } from '#shared/types/db'
 
 // Typed tables: `db('users')` knows its columns. Declared here, beside useDb, so every
 // project that compiles a route (the server's and the pages' type inference) sees it.
@@ -10,6 +10,7 @@ declare module 'knex/types/tables' {
     invitations: InvitationRow
     sign_in_failures: SignInFailureRow
     audit_log: AuditRow
+    species_scf_cache: ScfCacheRow
   }
 }
 

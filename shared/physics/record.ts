@@ -4,7 +4,7 @@
  * Nested objects are frozen and shared between records of the same species (record-parts.ts);
  * copy before changing one.
  */
-import type { ScfSpeciesEstimates } from './scf/types'
+import type { ScfOrbital, ScfRadialDensity, ScfSpeciesEstimates } from './scf/types'
 import type { ConfigurationRule } from './configuration'
 import { METHOD_NAMES, type MethodName, diracHydrogenLikeEv, nuclearMass } from './methods'
 import { formatSpecies, parseSpecies, type ParsedSpecies } from './notation'
@@ -22,6 +22,16 @@ export interface DescribeOptions {
   methods?: string[]
   /** SCF results for this species from ./scf, when the caller has them */
   scf?: ScfSpeciesEstimates | null
+}
+
+/** What the record carries of an SCF solution: enough for the screening, radii and density charts. */
+export interface ScfSummary {
+  method: string
+  converged: boolean
+  iterations: number
+  totalEnergyHartree: number | null
+  orbitals: readonly ScfOrbital[]
+  density: ScfRadialDensity | null
 }
 
 export type ScreeningEntry = Readonly<ScreeningRow> & { readonly zEffMeanRadius?: number }
@@ -62,6 +72,8 @@ export interface SpeciesRecord {
   /** anions: the electron affinity is the binding energy of the extra electron */
   electronAffinity?: Readonly<ElectronAffinity>
   productionThresholdNote?: string
+  /** the SCF solution of this species, when the caller supplied one */
+  scf?: ScfSummary
   caution: string
 }
 
@@ -143,5 +155,16 @@ export function describeSpecies(input: string | ParsedSpecies, options: Describe
   if (base.referenceGroundLevel) record.referenceGroundLevel = base.referenceGroundLevel
   if (base.electronAffinity) record.electronAffinity = base.electronAffinity
   if (base.productionThresholdNote) record.productionThresholdNote = base.productionThresholdNote
+  if (scf) {
+    const own = scf.species
+    record.scf = {
+      method: own.method,
+      converged: own.converged,
+      iterations: own.iterations,
+      totalEnergyHartree: Number.isFinite(own.totalEnergyHartree) ? own.totalEnergyHartree : null,
+      orbitals: own.orbitals,
+      density: own.density ?? null,
+    }
+  }
   return record
 }

@@ -53,3 +53,14 @@ export interface AuditRow {
   after: unknown
   address: string | null
 }
+
+export interface ScfCacheRow {
+  z: number
+  charge: number
+  method: string
+  engine_version: string
+  converged: boolean
+  result: unknown
+  seconds: number
+  computed_at: Date
+}
