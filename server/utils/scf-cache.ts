@@ -27,3 +27,9 @@ export async function writeScfCache(db: Knex, z: number, charge: number, result:
     .onConflict(['z', 'charge', 'method', 'engine_version'])
     .ignore()
 }
+
+/** Every cached charge state of element z for this engine version, by charge. */
+export async function readScfCacheForElement(db: Knex, z: number): Promise<Map<number, ScfSpeciesEstimates>> {
+  const rows = await db('species_scf_cache').where({ z, method: SCF_METHOD, engine_version: ENGINE_VERSION }).select('charge', 'result')
+  return new Map(rows.map((r: { charge: number; result: unknown }) => [r.charge, r.result as ScfSpeciesEstimates]))
+}

@@ -37,14 +37,14 @@ export const METHODS: readonly MethodInfo[] = [
   },
   {
     name: 'scf-delta',
-    description: 'Total-energy difference of self-consistent central-field (Hartree–Fock–Slater) solutions of the next ion and the species',
-    citation: 'F. Herman and S. Skillman, Atomic Structure Calculations (Prentice-Hall, 1963)',
+    description: 'Total-energy difference (ΔSCF) of self-consistent central-field solutions of the next ion and the species: spin-polarised local density with the self-interaction correction, spherical average',
+    citation: 'W. Kohn and L. J. Sham, Phys. Rev. 140, A1133 (1965); S. H. Vosko, L. Wilk and M. Nusair, Can. J. Phys. 58, 1200 (1980); J. P. Perdew and A. Zunger, Phys. Rev. B 23, 5048 (1981)',
     scf: true,
   },
   {
     name: 'scf-eigenvalue',
-    description: 'Minus the orbital eigenvalue of the outermost electron in the self-consistent central-field solution',
-    citation: 'F. Herman and S. Skillman, Atomic Structure Calculations (Prentice-Hall, 1963)',
+    description: 'Minus the highest occupied orbital eigenvalue of the same self-interaction-corrected central-field solution',
+    citation: 'J. P. Perdew and A. Zunger, Phys. Rev. B 23, 5048 (1981); J. F. Janak, Phys. Rev. B 18, 7165 (1978)',
     scf: true,
   },
 ]
