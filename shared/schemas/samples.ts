@@ -42,27 +42,21 @@ export const ComponentSchema = z.strictObject({
 })
 export type ComponentBody = z.output<typeof ComponentSchema>
 
+// Checked in refinements (which let the other checks run on) and only then transformed, so a
+// form with a bad code still hears about every other problem at once.
 const hazardStatements = z
   .union([z.string(), z.array(z.string())], { error: 'Give hazard statements as H-codes, e.g. H300 H330' })
-  .transform((v, ctx) => {
-    const { codes, unknown } = parseHazardStatements(v)
-    for (const code of unknown) {
+  .superRefine((v, ctx) => {
+    for (const code of parseHazardStatements(v).unknown) {
       ctx.addIssue({ code: 'custom', message: `"${code.slice(0, 20)}" is not a GHS hazard statement code (use codes such as H225, H300+H330 or H350i)` })
     }
-    return codes
   })
+  .transform((v) => parseHazardStatements(v).codes)
 
 const nuclide = z
   .preprocess(blankToNull, z.string().max(20).nullable())
-  .transform((v, ctx) => {
-    if (v === null) return null
-    const n = parseNuclide(v)
-    if (!n) {
-      ctx.addIssue({ code: 'custom', message: 'Name a known nuclide, e.g. U-238 or 241Am' })
-      return z.NEVER
-    }
-    return formatNuclide(n)
-  })
+  .refine((v) => v === null || parseNuclide(v) !== null, 'Name a known nuclide, e.g. U-238 or 241Am')
+  .transform((v) => (v === null ? null : formatNuclide(parseNuclide(v)!)))
 
 // Every field a person fills in, without defaults, so that a partial update leaves out what it
 // does not change. Cross-field rules are in `checkSample`.

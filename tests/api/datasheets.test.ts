@@ -19,7 +19,7 @@ const PNG = Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0
 
 function form(bytes: Uint8Array, name: string, type = 'application/octet-stream'): FormData {
   const f = new FormData()
-  f.append('file', new Blob([bytes], { type }), name)
+  f.append('file', new Blob([Uint8Array.from(bytes)], { type }), name)
   return f
 }
 

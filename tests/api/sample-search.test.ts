@@ -56,6 +56,13 @@ describe('the sample list', () => {
     expect(r.body.items[0].location).toEqual({ code: shelf.code, name: `shelf ${shelf.code}` })
   })
 
+  it('counts the samples of a place with those of the places inside it', async () => {
+    const r = await manager.get('/api/locations')
+    const byId = new Map(r.body.items.map((p: { id: string; samples: number; path: string }) => [p.id, p]))
+    expect(byId.get(room.id)).toMatchObject({ samples: 1, path: room.code })
+    expect(byId.get(shelf.id)).toMatchObject({ samples: 1, path: `${room.code} › ${room.code}-C1 › ${shelf.code}` })
+  })
+
   it('takes a % or _ in the search as the character itself', async () => {
     expect((await manager.get(`/api/samples?q=${encodeURIComponent(`${tag}%`)}`)).body.total).toBe(0)
   })

@@ -56,6 +56,17 @@ describe('a sample from registration to retirement', () => {
     expect(audit[1]!.after).toMatchObject({ name: 'Renamed foil', version: 2 })
   })
 
+  it('tells every role the history of a sample: who changed which field', async () => {
+    const s = await createSample(manager, { name: 'Before' })
+    await manager.patch(`/api/samples/${s.id}`, { version: 1, name: 'After', arealDensity: 480 })
+    for (const who of ['scientist', 'technician', 'auditor'] as const) {
+      const r = await c[who].get(`/api/samples/${s.id}/history`)
+      expect(r.status).toBe(200)
+      expect(r.body.items.map((i: { action: string }) => i.action)).toEqual(['sample.updated', 'sample.created'])
+      expect(r.body.items[0]).toMatchObject({ actor: 'Maren Okafor', changes: [{ field: 'name', before: 'Before', after: 'After' }, { field: 'arealDensity', before: 500, after: 480 }] })
+    }
+  })
+
   it('replaces the composition only when one is sent', async () => {
     const s = await createSample(manager)
     const r = await manager.patch(`/api/samples/${s.id}`, {

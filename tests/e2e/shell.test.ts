@@ -13,10 +13,10 @@ afterAll(async () => {
 
 // What each role should find in the main navigation (DESIGN.md §2), as far as pages exist.
 const NAV: Array<[string, string[], string[]]> = [
-  ['manager', ['Overview', 'Audit trail', 'People'], []],
-  ['scientist', ['Overview'], ['Audit trail', 'People']],
-  ['technician', ['Overview'], ['Audit trail', 'People']],
-  ['auditor', ['Overview', 'Audit trail'], ['People']],
+  ['manager', ['Overview', 'Samples', 'Audit trail', 'People'], []],
+  ['scientist', ['Overview', 'Samples'], ['Audit trail', 'People']],
+  ['technician', ['Overview', 'Samples'], ['Audit trail', 'People']],
+  ['auditor', ['Overview', 'Samples', 'Audit trail'], ['People']],
 ]
 
 describe('the shell, per role', () => {

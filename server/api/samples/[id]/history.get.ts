@@ -6,11 +6,14 @@ import { IdParam } from '#shared/schemas/common'
 // with the roles that read the audit trail.
 const HIDDEN = new Set(['version', 'updatedAt', 'createdAt', 'location', 'hazardKinds'])
 
+// A place is shown by its path, which people read; the record keeps the id.
+const placeOf = (r: Record<string, unknown>) => (r.location as { path?: string } | null)?.path ?? (r.locationId ? String(r.locationId) : null)
+
 function changedFields(before: Record<string, unknown> | null, after: Record<string, unknown> | null) {
   if (!before || !after) return []
   return Object.keys(after)
     .filter((k) => !HIDDEN.has(k) && JSON.stringify(before[k]) !== JSON.stringify(after[k]))
-    .map((field) => ({ field, before: before[field] ?? null, after: after[field] ?? null }))
+    .map((field) => (field === 'locationId' ? { field, before: placeOf(before), after: placeOf(after) } : { field, before: before[field] ?? null, after: after[field] ?? null }))
 }
 
 export default defineEventHandler(async (event) => {
@@ -27,9 +30,9 @@ export default defineEventHandler(async (event) => {
   return {
     items: rows.map((r) => ({
       id: Number(r.id),
-      at: r.at,
-      action: r.action,
-      actor: r.actor_name ?? r.actor_email ?? null,
+      at: r.at as Date,
+      action: r.action as string,
+      actor: (r.actor_name ?? r.actor_email ?? null) as string | null,
       changes: changedFields(r.before as Record<string, unknown> | null, r.after as Record<string, unknown> | null),
       datasheet: r.action === 'sample.datasheet-added' ? ((r.after as { datasheet?: { fileName: string } } | null)?.datasheet?.fileName ?? null) : null,
     })),
