@@ -45,8 +45,8 @@ process.on('SIGINT', () => stop(0))
 process.on('SIGTERM', () => stop(0))
 
 try {
-  dbTask(['migrate'], services.env)
-  dbTask(['seed', '--if-empty'], services.env)
+  await dbTask(['migrate'], services.env)
+  await dbTask(['seed', '--if-empty'], services.env)
   ensureBuild()
 } catch (e) {
   console.error(e.message)

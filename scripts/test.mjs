@@ -36,8 +36,8 @@ const services = await startServices({ storage: tmp, ports, database: 'ionfolio_
 let app = null
 let code = 1
 try {
-  dbTask(['migrate'], services.env)
-  dbTask(['seed'], services.env)
+  await dbTask(['migrate'], services.env)
+  await dbTask(['seed'], services.env)
   ensureBuild()
   const baseUrl = `http://127.0.0.1:${ports.app}`
   const appEnv = {

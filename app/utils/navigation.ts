@@ -9,6 +9,7 @@ export interface NavItem {
 /** The main navigation; each entry shows only to roles holding its capability. */
 export const NAVIGATION: NavItem[] = [
   { to: '/', label: 'Overview', capability: null },
+  { to: '/samples', label: 'Samples', capability: 'readSamples' },
   { to: '/species', label: 'Species', capability: 'lookUpSpecies' },
   { to: '/audit', label: 'Audit trail', capability: 'readAudit' },
   { to: '/people', label: 'People', capability: 'managePeople' },

@@ -3,7 +3,7 @@ import { existsSync, statSync, readdirSync, readFileSync, writeFileSync, mkdirSy
 import { createHash } from 'node:crypto'
 import path from 'node:path'
 import { fileURLToPath } from 'node:url'
-import { run, aptInstall } from './proc.mjs'
+import { run, aptInstall, startChild } from './proc.mjs'
 
 export const ROOT = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', '..')
 
@@ -51,7 +51,13 @@ export function ensureBuild({ force = false } = {}) {
   writeFileSync(stamp, digest)
 }
 
-/** Runs the database chores script (migrate, seed) with tsx against `databaseUrl`. */
-export function dbTask(args, env) {
-  run(process.execPath, ['--import', 'tsx', path.join(ROOT, 'scripts', 'db.ts'), ...args], { cwd: ROOT, env: { ...process.env, ...env } })
+/**
+ * Runs the database chores script (migrate, seed) with tsx against the database in `env`;
+ * resolves when it is done and rejects when it fails. It does not block this process: the object
+ * store runs in here, and the seeds upload their datasheets to it.
+ */
+export async function dbTask(args, env) {
+  const child = startChild(process.execPath, ['--import', 'tsx', path.join(ROOT, 'scripts', 'db.ts'), ...args], { cwd: ROOT, env: { ...process.env, ...env }, stdio: 'inherit' })
+  const code = await child.exited
+  if (code !== 0) throw new Error(`scripts/db.ts ${args.join(' ')} exited with ${code}`)
 }

@@ -1,5 +1,6 @@
 import knexFactory, { type Knex } from 'knex'
-import type { AuditRow, InvitationRow, ScfCacheRow, SessionRow, SignInFailureRow, UserRow } from '#shared/types/db'
+import pg from 'pg'
+import type { AuditRow, DatasheetRow, InvitationRow, LocationRow, SampleComponentRow, SampleRow, ScfCacheRow, SessionRow, SignInFailureRow, UserRow } from '#shared/types/db'
 
 // Typed tables: `db('users')` knows its columns. Declared here, beside useDb, so every
 // project that compiles a route (the server's and the pages' type inference) sees it.
@@ -10,9 +11,17 @@ declare module 'knex/types/tables' {
     invitations: InvitationRow
     sign_in_failures: SignInFailureRow
     audit_log: AuditRow
+    locations: LocationRow
+    samples: SampleRow
+    sample_components: SampleComponentRow
+    datasheets: DatasheetRow
     species_scf_cache: ScfCacheRow
   }
 }
+
+// A DATE is a calendar day with no time zone: read it as the 'YYYY-MM-DD' it holds, not as a
+// JavaScript Date at local midnight that shifts a day when serialised in another zone.
+pg.types.setTypeParser(pg.types.builtins.DATE, (v: string) => v)
 
 let instance: Knex | null = null
 

@@ -19,6 +19,20 @@ const MATRIX: Array<{ route: string; method: string; body?: unknown; expect: Rec
   { method: 'PATCH', route: `/api/users/${randomUUID()}`, body: { role: 'auditor' }, expect: { manager: 404, scientist: 403, technician: 403, auditor: 403, anonymous: 401 } },
   { method: 'GET', route: '/api/audit', expect: { manager: 200, scientist: 403, technician: 403, auditor: 200, anonymous: 401 } },
   { method: 'GET', route: '/api/audit?format=csv', expect: { manager: 200, scientist: 403, technician: 403, auditor: 200, anonymous: 401 } },
+  { method: 'GET', route: '/api/samples', expect: { manager: 200, scientist: 200, technician: 200, auditor: 200, anonymous: 401 } },
+  { method: 'GET', route: '/api/samples?format=csv', expect: { manager: 200, scientist: 200, technician: 200, auditor: 200, anonymous: 401 } },
+  { method: 'POST', route: '/api/samples', body: { name: '' }, expect: { manager: 400, scientist: 403, technician: 403, auditor: 403, anonymous: 401 } },
+  { method: 'GET', route: `/api/samples/${randomUUID()}`, expect: { manager: 404, scientist: 404, technician: 404, auditor: 404, anonymous: 401 } },
+  { method: 'GET', route: '/api/samples/by-code/S-1999-999999', expect: { manager: 404, scientist: 404, technician: 404, auditor: 404, anonymous: 401 } },
+  { method: 'PATCH', route: `/api/samples/${randomUUID()}`, body: { version: 1, name: 'x' }, expect: { manager: 404, scientist: 403, technician: 403, auditor: 403, anonymous: 401 } },
+  { method: 'DELETE', route: `/api/samples/${randomUUID()}`, expect: { manager: 404, scientist: 403, technician: 403, auditor: 403, anonymous: 401 } },
+  { method: 'GET', route: `/api/samples/${randomUUID()}/history`, expect: { manager: 404, scientist: 404, technician: 404, auditor: 404, anonymous: 401 } },
+  { method: 'POST', route: `/api/samples/${randomUUID()}/datasheets`, expect: { manager: 404, scientist: 403, technician: 403, auditor: 403, anonymous: 401 } },
+  { method: 'GET', route: `/api/datasheets/${randomUUID()}/download`, expect: { manager: 404, scientist: 404, technician: 404, auditor: 404, anonymous: 401 } },
+  { method: 'POST', route: '/api/samples/import?dryRun=true', body: 'name,material,form\n', expect: { manager: 200, scientist: 403, technician: 403, auditor: 403, anonymous: 401 } },
+  { method: 'POST', route: '/api/samples/import', body: 'name,material,form\n', expect: { manager: 400, scientist: 403, technician: 403, auditor: 403, anonymous: 401 } },
+  { method: 'GET', route: '/api/locations', expect: { manager: 200, scientist: 200, technician: 200, auditor: 200, anonymous: 401 } },
+  { method: 'POST', route: '/api/locations', body: { kind: 'attic' }, expect: { manager: 400, scientist: 403, technician: 403, auditor: 403, anonymous: 401 } },
 ]
 
 const cases = MATRIX.flatMap((m) => (Object.keys(m.expect) as Who[]).map((who) => [m.method, m.route, who, m.expect[who], m.body] as const))

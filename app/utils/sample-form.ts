@@ -1,0 +1,88 @@
+import type { SampleInput } from '#shared/schemas/samples'
+
+// The sample form keeps every field as the text typed; SampleBody reads the text as the server
+// does, so the form and the server agree on every number.
+
+export interface ComponentRow {
+  key: number
+  z: string
+  massNumber: string
+  fraction: string
+  enrichmentPercent: string
+  fractionUncertainty: string
+  enrichmentUncertainty: string
+}
+
+export interface SampleFormState {
+  name: string
+  material: string
+  formula: string
+  form: string
+  status: string
+  arealDensity: string
+  arealDensityUncertainty: string
+  thickness: string
+  bulkDensity: string
+  massMg: string
+  backing: string
+  supplier: string
+  lot: string
+  receivedOn: string
+  recertifyBy: string
+  locationId: string
+  hazardStatements: string
+  radioactive: boolean
+  nuclide: string
+  activityBq: string
+  notes: string
+  basis: 'atom' | 'mass'
+  components: ComponentRow[]
+}
+
+let nextKey = 1
+const text = (v: unknown) => (v === null || v === undefined ? '' : String(v))
+
+/** An empty composition row. */
+export function blankComponent(): ComponentRow {
+  return { key: nextKey++, z: '', massNumber: '', fraction: '', enrichmentPercent: '', fractionUncertainty: '', enrichmentUncertainty: '' }
+}
+
+interface StoredSample {
+  [k: string]: unknown
+  components: { z: number; massNumber: number | null; fraction: number; basis: string; enrichmentPercent: number | null; fractionUncertainty: number | null; enrichmentUncertainty: number | null }[]
+  hazardStatements: string[]
+  radioactive: boolean
+}
+
+/** The form's text for a stored sample, or for a new one. */
+export function formState(s?: StoredSample | null): SampleFormState {
+  const f = (k: string) => text(s?.[k])
+  return {
+    name: f('name'), material: f('material'), formula: f('formula'), form: f('form') || 'foil', status: s && s.status !== 'retired' ? f('status') : 'available',
+    arealDensity: f('arealDensity'), arealDensityUncertainty: f('arealDensityUncertainty'), thickness: f('thickness'), bulkDensity: f('bulkDensity'), massMg: f('massMg'),
+    backing: f('backing'), supplier: f('supplier'), lot: f('lot'), receivedOn: f('receivedOn'), recertifyBy: f('recertifyBy'), locationId: f('locationId'),
+    hazardStatements: (s?.hazardStatements ?? []).join(' '), radioactive: s?.radioactive ?? false, nuclide: f('nuclide'), activityBq: f('activityBq'), notes: f('notes'),
+    basis: s?.components[0]?.basis === 'mass' ? 'mass' : 'atom',
+    components: s?.components.length
+      ? s.components.map((c) => ({ key: nextKey++, z: text(c.z), massNumber: text(c.massNumber), fraction: text(c.fraction), enrichmentPercent: text(c.enrichmentPercent), fractionUncertainty: text(c.fractionUncertainty), enrichmentUncertainty: text(c.enrichmentUncertainty) }))
+      : [blankComponent()],
+  }
+}
+
+/** What the form sends: SampleBody's input. A row left wholly empty is not a component. */
+export function formInput(s: SampleFormState): SampleInput {
+  const { basis, components, ...fields } = s
+  const rows = components.filter((c) => c.z || c.fraction || c.massNumber)
+  // form and status are checked by the schema, which names the values it accepts
+  return { ...fields, components: rows.map(({ key: _key, ...c }) => ({ ...c, massNumber: c.massNumber || null, basis })) } as SampleInput
+}
+
+/** Field errors by path ("components.0.fraction"), first message each. */
+export function issuesByPath(issues: readonly { path: string | readonly PropertyKey[]; message: string }[]): Record<string, string> {
+  const out: Record<string, string> = {}
+  for (const i of issues) {
+    const key = typeof i.path === 'string' ? i.path : i.path.map(String).join('.')
+    out[key] ??= i.message
+  }
+  return out
+}

@@ -1,0 +1,172 @@
+import { describe, it, expect, beforeAll, afterAll } from 'vitest'
+import { randomUUID } from 'node:crypto'
+import type { Browser, Page } from 'playwright-core'
+import { launch, newContext, signInAs, snap, waitForApp } from '../support/browser'
+import { unique } from '../support/api'
+
+let browser: Browser
+beforeAll(async () => {
+  browser = await launch()
+})
+afterAll(async () => {
+  await browser?.close()
+})
+
+const PDF = Buffer.from('%PDF-1.4\n1 0 obj << /Type /Catalog >> endobj\ntrailer << /Root 1 0 R >>\n%%EOF\n', 'latin1')
+
+async function component(page: Page, index: number, z: string, massNumber: string, fraction: string) {
+  const row = page.getByTestId(`component-${index}`)
+  await row.locator('select').nth(0).selectOption(z)
+  await row.locator('select').nth(1).selectOption(massNumber)
+  await row.getByLabel(/fraction$/i).first().fill(fraction)
+}
+
+describe('the sample registry in the browser', () => {
+  const tag = unique()
+  let samplePath = ''
+
+  it('lets a manager register a sample with two isotopic components, showing errors beside the fields', async () => {
+    const context = await newContext(browser)
+    const page = await context.newPage()
+    await signInAs(page, 'manager')
+    await page.goto('/samples/new')
+    await waitForApp(page)
+    await page.fill('#s-name', `Nickel pair ${tag}`)
+    await page.fill('#s-material', 'Nickel metal, 58Ni and 60Ni')
+    await page.fill('#s-formula', 'Ni')
+    await component(page, 0, '28', '58', '0.7')
+    await page.getByTestId('add-component').click()
+    await expect(page.evaluate(() => document.activeElement?.closest('[data-testid=component-1]') !== null)).resolves.toBe(true)
+    await component(page, 1, '28', '60', '0.2')
+    await page.fill('#s-areal', '500')
+    await page.fill('#s-areal-u', '15')
+    await page.fill('#s-rho', '8.908')
+    await page.fill('#s-hazards', 'H317 H999')
+    await page.getByRole('button', { name: 'Register sample' }).click()
+    await page.getByText(/The fractions add up to 0\.9000/).waitFor({ timeout: 5_000 })
+    await page.getByText(/"H999" is not a GHS hazard statement code/).waitFor({ timeout: 5_000 })
+    expect(new URL(page.url()).pathname).toBe('/samples/new')
+    await snap(page, 'sample-form-errors')
+
+    await page.getByTestId('component-1').getByLabel(/fraction$/i).first().fill('0.3')
+    await page.fill('#s-hazards', 'H317 H351 H372')
+    await expect(page.getByTestId('fraction-sum').innerText()).resolves.toContain('1.0000')
+    await snap(page, 'sample-form')
+    await Promise.all([page.waitForURL(/\/samples\/[0-9a-f-]{36}$/), page.getByRole('button', { name: 'Register sample' }).click()])
+    samplePath = new URL(page.url()).pathname
+    await expect(page.getByTestId('sample-code').innerText()).resolves.toMatch(/^S-\d{4}-\d{6}$/)
+    const isotopes = await page.getByTestId('isotopes-table').innerText()
+    expect(isotopes).toContain('⁵⁸Ni')
+    expect(isotopes).toContain('⁶⁰Ni')
+    await expect(page.getByTestId('mean-mass').innerText()).resolves.toMatch(/^58\.\d+ u$/)
+    await context.close()
+  })
+
+  it('uploads a datasheet with a progress bar that runs to the end', async () => {
+    const context = await newContext(browser)
+    const page = await context.newPage()
+    await signInAs(page, 'manager')
+    await page.goto(samplePath)
+    await waitForApp(page)
+    await page.setInputFiles('#datasheet-file', { name: `coa-${tag}.pdf`, mimeType: 'application/pdf', buffer: PDF })
+    await page.getByRole('button', { name: 'Upload' }).click()
+    await page.waitForSelector('[data-testid=upload-progress][aria-valuenow="100"]')
+    await expect(page.getByTestId('upload-message').innerText()).resolves.toContain('is stored')
+    await expect(page.getByTestId('datasheet-list').innerText()).resolves.toContain(`coa-${tag}.pdf`)
+    await expect(page.getByTestId('history').innerText()).resolves.toContain('Datasheet added')
+    await snap(page, 'sample-page-desktop')
+    await context.close()
+  })
+
+  it('finds the sample by search in the list', async () => {
+    const context = await newContext(browser)
+    const page = await context.newPage()
+    await signInAs(page, 'manager')
+    await page.goto('/samples')
+    await waitForApp(page)
+    await snap(page, 'samples-list-desktop')
+    await page.getByTestId('sample-search').fill(`pair ${tag}`)
+    await page.waitForFunction(() => document.querySelector('[data-testid=row-count]')?.textContent?.includes('of 1'))
+    expect(new URL(page.url()).searchParams.get('q')).toBe(`pair ${tag}`)
+    await page.getByRole('link', { name: /^S-\d{4}-\d{6}$/ }).click()
+    await page.waitForURL((u) => u.pathname === samplePath)
+    await page.goto(`/samples?q=${encodeURIComponent(`no such thing ${tag}`)}`)
+    await expect(page.getByTestId('empty-state').innerText()).resolves.toContain('No sample matches')
+    await context.close()
+  })
+
+  it('shows a technician everything and no edit controls', async () => {
+    const context = await newContext(browser)
+    const page = await context.newPage()
+    await signInAs(page, 'technician')
+    await page.goto(samplePath)
+    await waitForApp(page)
+    await expect(page.getByTestId('sample-code').isVisible()).resolves.toBe(true)
+    await expect(page.getByTestId('datasheet-list').innerText()).resolves.toContain(`coa-${tag}.pdf`)
+    await expect(page.getByTestId('edit-sample').count()).resolves.toBe(0)
+    await expect(page.getByTestId('retire-sample').count()).resolves.toBe(0)
+    await expect(page.locator('#datasheet-file').count()).resolves.toBe(0)
+    await page.goto('/samples')
+    await waitForApp(page)
+    await expect(page.getByRole('link', { name: 'Register a sample' }).count()).resolves.toBe(0)
+    await expect(page.getByRole('link', { name: 'Import CSV' }).count()).resolves.toBe(0)
+    await page.goto('/samples/new')
+    await expect(page.getByRole('heading', { level: 1 }).innerText()).resolves.toMatch(/Not part of your role/)
+    await context.close()
+  })
+
+  it('shows the caution box of a radioactive sample, at desktop and phone width', async () => {
+    for (const size of ['desktop', 'phone'] as const) {
+      const context = await newContext(browser, size)
+      const page = await context.newPage()
+      await signInAs(page, 'scientist')
+      await page.goto('/samples?hazard=radioactive&q=uranium')
+      await waitForApp(page)
+      await page.getByRole('link', { name: /^S-\d{4}-\d{6}$/ }).first().click()
+      await page.waitForSelector('[data-testid=cautions]')
+      await expect(page.locator('[data-caution=radioactive]').innerText()).resolves.toMatch(/radiation-protection officer/)
+      await snap(page, `sample-radioactive-${size}`)
+      if (size === 'phone') {
+        await page.goto(samplePath)
+        await waitForApp(page)
+        await snap(page, 'sample-page-phone')
+        await page.goto('/samples')
+        await waitForApp(page)
+        await snap(page, 'samples-list-phone')
+      }
+      await context.close()
+    }
+  })
+
+  it('asks before retiring, and retires only when confirmed', async () => {
+    const context = await newContext(browser)
+    const page = await context.newPage()
+    await signInAs(page, 'manager')
+    await page.goto(samplePath)
+    await waitForApp(page)
+    page.once('dialog', (d) => d.dismiss())
+    await page.getByTestId('retire-sample').click()
+    await expect(page.getByTestId('sample-code').isVisible()).resolves.toBe(true)
+    await expect(page.getByText('Retired', { exact: true }).count()).resolves.toBe(0)
+    let asked = ''
+    page.once('dialog', (d) => {
+      asked = d.message()
+      void d.accept()
+    })
+    await page.getByTestId('retire-sample').click()
+    await page.getByText('The sample is retired.').waitFor()
+    expect(asked).toMatch(/^Retire S-\d{4}-\d{6}\?/)
+    await expect(page.getByTestId('retire-sample').count()).resolves.toBe(0)
+    await context.close()
+  })
+
+  it('answers a missing sample with the 404 page', async () => {
+    const context = await newContext(browser)
+    const page = await context.newPage()
+    await signInAs(page, 'auditor')
+    const res = await page.goto(`/samples/${randomUUID()}`)
+    expect(res?.status()).toBe(404)
+    await expect(page.getByRole('heading', { level: 1 }).innerText()).resolves.toMatch(/Nothing here/)
+    await context.close()
+  })
+})
