@@ -24,12 +24,17 @@ export function table(header: string[], rows: (string | Record<string, unknown>)
       vLineWidth: () => 0,
       hLineColor: () => '#b9c4c6',
       fillColor: (row: number) => (row === 0 ? '#eef3f3' : null),
-      paddingTop: () => 1.6,
-      paddingBottom: () => 1.6,
+      paddingTop: () => 1.3,
+      paddingBottom: () => 1.3,
       paddingLeft: () => 3,
       paddingRight: () => 3,
     },
     fontSize: 8,
     margin: [0, 1, 0, 5],
   }
+}
+
+/** Two sections side by side, each a heading with what follows it; kept together on a page. */
+export function sideBySide(left: Record<string, unknown>[], right: Record<string, unknown>[]) {
+  return { columns: [{ width: '*', stack: left }, { width: '*', stack: right }], columnGap: 17, unbreakable: true }
 }

@@ -3,7 +3,7 @@ import { HEADINGS } from '../../shared/certificates/payload'
 import type { SamplePayload, Quantity } from '../../shared/certificates/sample-payload'
 import { formatQuantity, formatValue } from '../../shared/certificates/format'
 import { runs } from './fonts'
-import { heading, para, table, MUTED } from './certificate-parts'
+import { heading, para, sideBySide, table, MUTED } from './certificate-parts'
 
 function quantityRow(label: string, q: Quantity | null, note = ''): string[] | null {
   if (!q) return null
@@ -62,17 +62,14 @@ function hazards(p: SamplePayload) {
     })
   }
   out.push(para(h.deferral))
-  out.push(para(`Statement texts: ${h.statementSource}.`, { style: 'small' }))
+  if (h.statements.length) out.push(para(`Statement texts: ${h.statementSource}.`, { style: 'small' }))
   return out
 }
 
 /** Everything between the title block and the issuer, for a sample. */
 export function sampleSections(p: SamplePayload): Record<string, unknown>[] {
   return [
-    heading(HEADINGS.description),
-    para(p.description),
-    heading(HEADINGS.intendedUse),
-    para(p.intendedUse),
+    sideBySide([heading(HEADINGS.description), para(p.description)], [heading(HEADINGS.intendedUse), para(p.intendedUse)]),
     ...properties(p),
     heading(HEADINGS.method),
     para(p.method.statement),
@@ -83,11 +80,10 @@ export function sampleSections(p: SamplePayload): Record<string, unknown>[] {
     ...(p.records.length
       ? [table(['Document on file', 'SHA-256'], p.records.map((r) => [r.fileName, { text: runs(r.sha256, 'Mono'), fontSize: 6.4 }]), ['*', 'auto'])]
       : []),
-    heading(HEADINGS.validity),
-    para(p.validity.statement),
-    heading(HEADINGS.storage),
-    ...(p.storage.place ? [para(`Kept at ${p.storage.place}.`)] : [para('No storage place is recorded.', { color: MUTED })]),
-    para(p.storage.instructions),
+    sideBySide(
+      [heading(HEADINGS.validity), para(p.validity.statement)],
+      [heading(HEADINGS.storage), p.storage.place ? para(`Kept at ${p.storage.place}.`) : para('No storage place is recorded.', { color: MUTED }), para(p.storage.instructions)],
+    ),
     ...hazards(p),
   ]
 }

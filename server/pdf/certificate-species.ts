@@ -2,7 +2,7 @@
 import { HEADINGS } from '../../shared/certificates/payload'
 import type { SpeciesPayload } from '../../shared/certificates/species-payload'
 import { formatEv, formatValue } from '../../shared/certificates/format'
-import { heading, para, table } from './certificate-parts'
+import { heading, para, sideBySide, table } from './certificate-parts'
 
 function deviation(ev: number | null, percent: number | null): string {
   if (ev === null) return '—'
@@ -43,10 +43,7 @@ function properties(p: SpeciesPayload) {
 /** Everything between the title block and the issuer, for a recorded species. */
 export function speciesSections(p: SpeciesPayload): Record<string, unknown>[] {
   return [
-    heading(HEADINGS.description),
-    para(p.description),
-    heading(HEADINGS.intendedUse),
-    para(p.intendedUse),
+    sideBySide([heading(HEADINGS.description), para(p.description)], [heading(HEADINGS.intendedUse), para(p.intendedUse)]),
     ...properties(p),
     heading(HEADINGS.estimates),
     para(p.estimates, { bold: true }),
@@ -55,10 +52,7 @@ export function speciesSections(p: SpeciesPayload): Record<string, unknown>[] {
     table(['Method', 'What it computes', 'Citation'], p.method.methods.map((m) => [m.name, m.description, m.citation]), [80, '*', 150]),
     heading(HEADINGS.traceability),
     para(p.traceability),
-    heading(HEADINGS.validity),
-    para(p.validity.statement),
-    heading(HEADINGS.storage),
-    para('Not applicable: the subject is a computed data record, not a material.'),
+    sideBySide([heading(HEADINGS.validity), para(p.validity.statement)], [heading(HEADINGS.storage), para('Not applicable: the subject is a computed data record, not a material.')]),
     heading(HEADINGS.hazards),
     para('Not applicable to computed data. For the samples that can source this species, see their own certificates and labels.'),
   ]

@@ -16,7 +16,7 @@ import { speciesSections } from './certificate-species'
 
 export type CertificatePayload = SamplePayload | SpeciesPayload
 
-const MARGIN = { side: 18, top: 16, bottom: 16 }
+const MARGIN = { side: 18, top: 14, bottom: 15 }
 const QR_MM = 32
 const A4_WIDTH_MM = 210
 
@@ -30,9 +30,9 @@ function titleBlock(p: CertificatePayload, verifyUrl: string, digest: string) {
           { text: runs(p.issuer.laboratory), fontSize: 13, bold: true, color: INK },
           { text: 'Certificate issued through Ionfolio', fontSize: 8, color: MUTED, margin: [0, 0, 0, 8] },
           { text: runs(p.title), fontSize: 17, bold: true },
-          { text: [{ text: runs(p.number, 'Mono'), bold: true }, `   version ${p.version}   ·   issued ${formatDay(p.issued.at)}`], fontSize: 10, margin: [0, 3, 0, 6] },
+          { text: [{ text: runs(p.number, 'Mono') }, `   version ${p.version}   ·   issued ${formatDay(p.issued.at)}`], fontSize: 10.5, margin: [0, 3, 0, 5] },
           { text: runs(subject), fontSize: 10, bold: true },
-          { text: [{ text: 'SHA-256 ', bold: true }, { text: digest, font: 'Mono' }], fontSize: 6.6, color: MUTED, margin: [0, 3, 0, 0] },
+          { text: [{ text: 'SHA-256 ', bold: true }, { text: digest, font: 'Mono' }], fontSize: 7, color: '#33413f', margin: [0, 3, 0, 0] },
         ],
       },
       // The QR code is drawn at a fixed place on page 1 (below); this column keeps its room.
@@ -63,13 +63,22 @@ function replacesNotice(p: CertificatePayload) {
   ]
 }
 
-function closing(p: CertificatePayload, digest: string, verifyPage: string) {
+function closing(p: CertificatePayload, verifyPage: string) {
   return [
-    heading(HEADINGS.issuedBy),
-    para(`${p.issued.by.name}, ${p.issued.by.role}, for ${p.issuer.laboratory}, on ${formatInstant(p.issued.at)}. Issued electronically; the record in Ionfolio stands in place of a handwritten signature.`),
-    heading(HEADINGS.verification),
-    para(`Check this certificate at ${verifyPage} or by scanning the QR code: the page answers genuine, superseded, revoked or unknown. The SHA-256 below is computed over the certificate's content (its canonical JSON, keys sorted) as frozen at issue.`),
-    { text: [{ text: 'SHA-256  ', bold: true }, { text: digest, font: 'Mono' }], fontSize: 7.4, margin: [0, 1, 0, 0] },
+    {
+      columns: [
+        { width: '*', stack: [heading(HEADINGS.issuedBy), para(`${p.issued.by.name}, ${p.issued.by.role}, for ${p.issuer.laboratory}, ${formatInstant(p.issued.at)}. Issued electronically; the Ionfolio record stands in for a signature.`)] },
+        {
+          width: '*',
+          stack: [
+            heading(HEADINGS.verification),
+            para(`Scan the QR code, or open ${verifyPage} and enter the SHA-256 printed under the title (of the content as canonical JSON). It answers genuine, superseded, revoked or unknown.`),
+          ],
+        },
+      ],
+      columnGap: mm(6),
+      unbreakable: true,
+    },
   ]
 }
 
@@ -80,9 +89,9 @@ export function certificateDocument(p: CertificatePayload, digest: string, verif
     pageSize: 'A4',
     pageMargins: [mm(MARGIN.side), mm(MARGIN.top), mm(MARGIN.side), mm(MARGIN.bottom)],
     info: { title: `${p.number} version ${p.version}: ${p.title}`, author: p.issuer.laboratory, subject: p.subject.type === 'sample' ? p.subject.code : p.subject.label, creator: 'Ionfolio', producer: 'Ionfolio', creationDate: new Date(p.issued.at) },
-    defaultStyle: { font: 'Inter', fontSize: 8.5, lineHeight: 1.18, color: '#1b1f20' },
+    defaultStyle: { font: 'Inter', fontSize: 8.3, lineHeight: 1.14, color: '#1b1f20' },
     styles: {
-      heading: { fontSize: 9.5, bold: true, color: INK, margin: [0, 5, 0, 2] },
+      heading: { fontSize: 9.3, bold: true, color: INK, margin: [0, 4, 0, 1.5] },
       th: { bold: true, fontSize: 7.5, color: '#33413f' },
       small: { fontSize: 7.5, color: MUTED },
     },
@@ -97,6 +106,6 @@ export function certificateDocument(p: CertificatePayload, digest: string, verif
       color: MUTED,
       margin: [mm(MARGIN.side), mm(6), mm(MARGIN.side), 0],
     }),
-    content: [titleBlock(p, verifyUrl, digest), ...replacesNotice(p), ...body, ...closing(p, digest, verifyPage)],
+    content: [titleBlock(p, verifyUrl, digest), ...replacesNotice(p), ...body, ...closing(p, verifyPage)],
   }
 }

@@ -7,6 +7,10 @@
  *
  * Start-up converts each WOFF to TrueType once and registers the result in pdfmake's virtual
  * file system: handing pdfmake the WOFF files instead makes every document inflate them again.
+ * The TrueType files leave out the OpenType layout tables (GSUB, GPOS, GDEF): shaping with them
+ * was most of the time of a certificate, and a certificate or label needs no ligatures or
+ * contextual forms. Without them pdfmake sets each glyph at its plain advance width, the same
+ * width textWidth() measures, so fitted label lines are exact.
  */
 import pdfmake from 'pdfmake'
 import { woffToSfnt } from './woff'
@@ -25,17 +29,24 @@ export function fontFileNames(): string[] {
   return Object.values(FONT_SOURCES).flatMap((s) => s.subsets.flatMap((sub) => [s.normal, s.bold].map((w) => `${s.prefix}-${sub}-${w}-normal.woff`)))
 }
 
+/** OpenType layout tables the converted fonts leave out (see above). */
+export const OMITTED_TABLES = ['GSUB', 'GPOS', 'GDEF'] as const
+
 const pdfFamily = (family: Family, subset: string) => (subset === 'latin' ? family : `${family}-${subset}`)
 
 interface Subset {
   name: string
   metrics: FontMetrics
+  bold: FontMetrics
 }
 const subsetsOf = new Map<Family, Subset[]>()
 let ready: Promise<void> | null = null
 
-/** How fonts reach pdfmake: converted TrueType buffers (the app) or the WOFF files as they are (the bench's baseline). */
-export type FontMode = 'ttf' | 'woff-paths'
+/**
+ * How fonts reach pdfmake: converted TrueType without the layout tables (the app); for the
+ * bench's baselines, converted with every table kept, or the WOFF files as they are.
+ */
+export type FontMode = 'ttf' | 'ttf-full' | 'woff-paths'
 
 /**
  * Loads, converts and registers the fonts once; later calls return the same promise. `read`
@@ -50,12 +61,13 @@ export function preparePdfFonts(read: (file: string) => Promise<Buffer>, opts: {
       const subsets: Subset[] = []
       for (const subset of source.subsets) {
         const files: Record<'normal' | 'bold', string> = { normal: '', bold: '' }
+        const metrics: Partial<Record<'normal' | 'bold', FontMetrics>> = {}
         for (const weight of ['normal', 'bold'] as const) {
           const name = `${source.prefix}-${subset}-${source[weight]}-normal.woff`
           const woff = await read(name)
-          const ttf = woffToSfnt(woff)
-          if (weight === 'normal') subsets.push({ name: pdfFamily(family, subset), metrics: fontMetrics(ttf) })
-          if (mode === 'ttf') {
+          const ttf = woffToSfnt(woff, { omit: mode === 'ttf' ? OMITTED_TABLES : [] })
+          metrics[weight] = fontMetrics(ttf)
+          if (mode !== 'woff-paths') {
             files[weight] = name.replace(/\.woff$/, '.ttf')
             pdfmake.virtualfs.writeFileSync(files[weight], ttf)
           } else {
@@ -63,6 +75,7 @@ export function preparePdfFonts(read: (file: string) => Promise<Buffer>, opts: {
             allowed.add(files[weight])
           }
         }
+        subsets.push({ name: pdfFamily(family, subset), metrics: metrics.normal!, bold: metrics.bold! })
         families[pdfFamily(family, subset)] = { normal: files.normal, bold: files.bold, italics: files.normal, bolditalics: files.bold }
       }
       subsetsOf.set(family, subsets)
@@ -140,14 +153,14 @@ export function runs(text: string, family: Family = 'Inter'): string | Run[] {
   return out
 }
 
-/** Width of a text in points at `size`, from the regular weight's advance widths (no kerning). */
-export function textWidth(text: string, size: number, family: Family = 'Inter'): number {
+/** Width of a text in points at `size`, from the advance widths of the weight it is set in (no kerning, as printed). */
+export function textWidth(text: string, size: number, family: Family = 'Inter', bold = false): number {
   const list = subsets(family)
   let em = 0
   for (const ch of text) {
     const cp = ch.codePointAt(0)!
     const subset = list.find((s) => s.metrics.advance.has(cp))
-    em += subset ? subset.metrics.advance.get(cp)! : 0.6
+    em += subset ? (bold ? subset.bold : subset.metrics).advance.get(cp) ?? subset.metrics.advance.get(cp)! : 0.6
   }
   return em * size
 }

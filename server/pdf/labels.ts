@@ -34,7 +34,7 @@ function pictogramRows(codes: readonly string[], size: number) {
   let x = 0
   let row = 0
   for (const code of codes) {
-    const w = textWidth(code, size) * 1.06 + mm(0.9)
+    const w = textWidth(code, size, 'Inter', true) + mm(0.9)
     if (x > 0 && x + w > TEXT_WIDTH) {
       x = 0
       row++
@@ -66,7 +66,7 @@ function drawLabel(label: LabelContent, xMm: number, yMm: number, guide: boolean
   if (guide) vectors.push({ type: 'rect', x, y, w: mm(LABEL.width), h: mm(LABEL.height), r: mm(1.5), lineWidth: 0.3, lineColor: '#9aa5a8', dash: { length: 2, space: 2 } })
   vectors.push(qrPathVector(label.url, x + mm(LABEL.padding), y + mm(LABEL.padding), mm(LABEL.qr)))
 
-  const code = fitLines(label.code, TEXT_WIDTH, 7.5, 1, 'Mono')[0]!
+  const code = fitLines(label.code, TEXT_WIDTH, 7.5, 1, 'Mono', true)[0]!
   nodes.push(placedText(code, tx, y + mm(2.4), { size: 7.5, bold: true, family: 'Mono' }))
 
   // Every pictogram must show, so they get their rows first (smaller type when they need more
@@ -78,7 +78,7 @@ function drawLabel(label: LabelContent, xMm: number, yMm: number, guide: boolean
   const showSpecies = !!label.mainSpecies && free >= NAME_LINE + SPECIES_LINE
   const nameLines = Math.max(1, Math.min(2, Math.floor((free - (showSpecies ? SPECIES_LINE : 0)) / NAME_LINE)))
   let lineY = 5.9
-  for (const line of fitLines(label.name, TEXT_WIDTH, 6.5, nameLines)) {
+  for (const line of fitLines(label.name, TEXT_WIDTH, 6.5, nameLines, 'Inter', true)) {
     nodes.push(placedText(line, tx, y + mm(lineY), { size: 6.5, bold: true }))
     lineY += NAME_LINE
   }
@@ -101,7 +101,7 @@ function drawLabel(label: LabelContent, xMm: number, yMm: number, guide: boolean
     nodes.push(placedText('RADIOACTIVE', tx + icon + mm(1), bottom - mm(4.8), { size: 6, bold: true }))
     if (label.radiation.nuclide) nodes.push(placedText(label.radiation.nuclide, tx + icon + mm(1), bottom - mm(2.5), { size: 6 }))
   } else if (label.otherCautions.length) {
-    const lines = fitLines(`Caution: ${label.otherCautions.join(', ').toLowerCase()}`, TEXT_WIDTH, 5.6, 2)
+    const lines = fitLines(`Caution: ${label.otherCautions.join(', ').toLowerCase()}`, TEXT_WIDTH, 5.6, 2, 'Inter', true)
     lines.forEach((line, i) => nodes.push(placedText(line, tx, bottom - mm(2.4 * (lines.length - i)), { size: 5.6, bold: true, color: RED })))
   }
   return { nodes, vectors }

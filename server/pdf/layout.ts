@@ -8,11 +8,12 @@ export const MM = 72 / 25.4
 export const mm = (v: number) => v * MM
 
 /**
- * Breaks `text` into at most `maxLines` lines no wider than `width` points at `size`, by words
+ * Breaks `text` into at most `maxLines` lines no wider than `width` points at `size` (in the
+ * weight it is printed in), by words
  * (a word wider than a line is broken by characters); what does not fit ends in an ellipsis.
  */
-export function fitLines(text: string, width: number, size: number, maxLines: number, family: Family = 'Inter'): string[] {
-  const fits = (s: string) => textWidth(s, size, family) <= width
+export function fitLines(text: string, width: number, size: number, maxLines: number, family: Family = 'Inter', bold = false): string[] {
+  const fits = (s: string) => textWidth(s, size, family, bold) <= width
   const lines: string[] = []
   let current = ''
   for (const word of text.trim().split(/\s+/).filter(Boolean)) {

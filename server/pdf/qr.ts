@@ -25,14 +25,6 @@ function runs(text: string): { n: number; rects: [number, number, number][] } {
   return { n, rects }
 }
 
-/** A pdfmake `svg` node `size` points square (quiet zone included), for a code in the flow of a document. */
-export function qrSvgNode(text: string, size: number) {
-  const { n, rects } = runs(text)
-  const d = rects.map(([x, y, w]) => `M${x + QUIET_MODULES} ${y + QUIET_MODULES}h${w}v1h${-w}z`).join('')
-  const total = n + 2 * QUIET_MODULES
-  return { svg: `<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 ${total} ${total}"><path fill="#000" d="${d}"/></svg>`, width: size, height: size }
-}
-
 /**
  * A pdfmake canvas `path` vector for a code whose top-left corner is at (x, y) on the page.
  * pdfmake does not offset path vectors, so they take page coordinates: several times faster to

@@ -8,16 +8,17 @@ import { inflateSync } from 'node:zlib'
 const WOFF_SIGNATURE = 0x774f4646 // 'wOFF'
 
 /**
- * Unpacks a WOFF 1.0 font into the TrueType/OpenType file it wraps. Done once per font at
- * start-up: fontkit can read WOFF itself, but then inflates every table again for every document.
+ * Unpacks a WOFF 1.0 font into the TrueType/OpenType file it wraps, leaving out the tables
+ * named in `omit`. Done once per font at start-up: fontkit can read WOFF itself, but then
+ * inflates every table again for every document.
  */
-export function woffToSfnt(woff: Buffer): Buffer {
+export function woffToSfnt(woff: Buffer, opts: { omit?: readonly string[] } = {}): Buffer {
   if (woff.readUInt32BE(0) !== WOFF_SIGNATURE) throw new Error('not a WOFF 1.0 font')
   const flavor = woff.readUInt32BE(4)
-  const numTables = woff.readUInt16BE(12)
   const tables: { tag: number; checksum: number; data: Buffer }[] = []
-  for (let i = 0; i < numTables; i++) {
+  for (let i = 0; i < woff.readUInt16BE(12); i++) {
     const at = 44 + i * 20
+    if (opts.omit?.includes(woff.toString('latin1', at, at + 4))) continue
     const tag = woff.readUInt32BE(at)
     const offset = woff.readUInt32BE(at + 4)
     const compLength = woff.readUInt32BE(at + 8)
@@ -29,6 +30,7 @@ export function woffToSfnt(woff: Buffer): Buffer {
     tables.push({ tag, checksum, data })
   }
   tables.sort((a, b) => a.tag - b.tag)
+  const numTables = tables.length
 
   const entrySelector = Math.floor(Math.log2(numTables))
   const searchRange = 2 ** entrySelector * 16

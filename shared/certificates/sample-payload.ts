@@ -10,6 +10,7 @@ import { ISOTOPE_SOURCE } from '../samples/composition'
 import { FORM_LABELS, type SampleForm } from '../samples/vocabulary'
 import { getElement } from '../physics/elements'
 import { formatDay } from './format'
+import { formulaText } from '../labels/content'
 import { payloadHead, type IssueContext, type PayloadHead } from './payload'
 
 export interface CertSampleInput {
@@ -66,7 +67,7 @@ function quantity(value: number | null, uncertainty: number | null, unit: string
 
 function describe(s: CertSampleInput): string {
   const form = FORM_LABELS[s.form].toLowerCase()
-  const parts = [`${s.material}${s.formula ? ` (${s.formula})` : ''}, ${form}${s.backing ? ` on ${s.backing}` : ''}.`]
+  const parts = [`${s.material}${s.formula ? ` (${formulaText(s.formula)})` : ''}, ${form}${s.backing ? ` on ${s.backing}` : ''}.`]
   const origin = [s.supplier ? `Supplier ${s.supplier}` : null, s.lot ? `lot ${s.lot}` : null].filter(Boolean).join(', ')
   if (origin) parts.push(`${origin}.`)
   if (s.receivedOn) parts.push(`Received ${formatDay(s.receivedOn)}.`)
@@ -84,7 +85,7 @@ export function samplePayload(s: CertSampleInput, datasheets: { fileName: string
     subject: { type: 'sample' as const, id: s.id, code: s.code, name: s.name },
     description: describe(s),
     intendedUse:
-      'Target or source material for ion-beam, ion-source and atomic-physics work at the issuing laboratory. The values describe this sample as it stood at issue; use them as a calibration only where the stated uncertainty meets the purpose.',
+      'Target or source material for ion-beam and atomic-physics work at the issuing laboratory. The values describe the sample at issue; use them for calibration only where the stated uncertainty suffices.',
     properties: {
       basis: s.components[0]?.basis ?? null,
       composition: s.components.map((c) => ({

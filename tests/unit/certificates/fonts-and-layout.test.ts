@@ -2,7 +2,7 @@ import { describe, it, expect, beforeAll } from 'vitest'
 import { readFileSync } from 'node:fs'
 import { woffToSfnt } from '../../../server/pdf/woff'
 import { fontMetrics } from '../../../server/pdf/font-metrics'
-import { fontFileNames, runs, textWidth } from '../../../server/pdf/fonts'
+import { fontFileNames, OMITTED_TABLES, runs, textWidth } from '../../../server/pdf/fonts'
 import { fontPath, preparePackageFonts } from '../../../server/pdf/package-fonts'
 import { fitLines, mm } from '../../../server/pdf/layout'
 import { LABEL, SHEET, PER_SHEET, labelsDocument, sheetSlot } from '../../../server/pdf/labels'
@@ -32,6 +32,15 @@ describe('WOFF to TrueType', () => {
       const table = ttf.subarray(offset, offset + ttf.readUInt32BE(at + 12))
       expect(checksum(table, tag === 'head'), tag).toBe(ttf.readUInt32BE(at + 4))
     }
+  })
+
+  it('leaves out the OpenType layout tables the app does without, and keeps the file sound', () => {
+    const ttf = woffToSfnt(readFileSync(fontPath('inter-latin-400-normal.woff')), { omit: OMITTED_TABLES })
+    const tags = Array.from({ length: ttf.readUInt16BE(4) }, (_, i) => ttf.toString('latin1', 12 + i * 16, 16 + i * 16))
+    for (const t of OMITTED_TABLES) expect(tags).not.toContain(t)
+    expect(tags).toEqual(expect.arrayContaining(['cmap', 'glyf', 'head', 'hhea', 'hmtx', 'loca', 'maxp']))
+    expect([...tags].sort()).toEqual(tags)
+    expect(fontMetrics(ttf).advance.get('A'.codePointAt(0)!)).toBeGreaterThan(0.5)
   })
 
   it('refuses a file that is not WOFF', () => {
@@ -75,6 +84,8 @@ describe('fitting text into a label', () => {
     expect(lines).toHaveLength(2)
     for (const l of lines) expect(textWidth(l, 6.5)).toBeLessThanOrEqual(width)
     expect(lines[1]!.endsWith('…')).toBe(true)
+    for (const l of fitLines('Enriched nickel-58 self-supporting foil rolled thin', width, 6.5, 2, 'Inter', true)) expect(textWidth(l, 6.5, 'Inter', true)).toBeLessThanOrEqual(width)
+    expect(textWidth('Nickel', 6.5, 'Inter', true)).toBeGreaterThan(textWidth('Nickel', 6.5))
   })
 
   it('breaks a word wider than the line by characters', () => {
@@ -119,7 +130,7 @@ describe('every text on a label stays inside it', () => {
       const slot = slots.find((s) => x >= s.x && x < s.x + LABEL.width && y >= s.y && y < s.y + LABEL.height)
       if (!slot) continue // the sheet caption above the labels
       const text = typeof n.text === 'string' ? n.text : (n.text as { text: string }[]).map((r) => r.text).join('')
-      const right = x + textWidth(text, n.fontSize, n.text[0]?.font?.startsWith('Mono') ? 'Mono' : 'Inter') / mm(1)
+      const right = x + textWidth(text, n.fontSize, n.text[0]?.font?.startsWith('Mono') ? 'Mono' : 'Inter', n.bold) / mm(1)
       expect(right, text).toBeLessThanOrEqual(slot.x + LABEL.width - 1.5)
       expect(y + (n.fontSize * 1.2) / mm(1), text).toBeLessThanOrEqual(slot.y + LABEL.height - 1.5)
       checked++
