@@ -26,7 +26,7 @@ const median = (xs: number[]) => {
 }
 
 async function time(build: () => Record<string, unknown>, runs: number, warm = 3): Promise<{ ms: number; bytes: number; pages: number }> {
-  let last = Buffer.alloc(0)
+  let last: Buffer = Buffer.alloc(0)
   for (let i = 0; i < warm; i++) last = await renderPdf(build())
   const each: number[] = []
   for (let i = 0; i < runs; i++) {
