@@ -1,6 +1,6 @@
 import type { Knex } from 'knex'
-import type { SampleListParams } from '#shared/schemas/samples'
-import { countRows } from './db'
+import type { SampleListParams } from '../../shared/schemas/samples'
+import { countRows } from './count'
 
 // The sample list's SQL, in one place for the list route, its CSV export and bench/registry.ts
 // (which times this same SQL straight through Knex). Plain imports only, no Nitro auto-imports.
@@ -26,11 +26,8 @@ function likeTerm(term: string): string {
   return `%${term.toLowerCase().replace(/[\\%_]/g, (c) => `\\${c}`)}%`
 }
 
-// The places whose code or name matches, with everything inside them. As `= any(array(…))` the
-// set is computed once (an InitPlan) and the sample side can use its location index.
-const PLACES_MATCHING = `array(with recursive hit as (
-    select id from locations where lower(code || ' ' || name) like ? escape '\\'
-    union select c.id from locations c join hit on c.parent_id = hit.id) select id from hit)`
+// A place and everything inside it. As `= any(array(…))` the set is computed once (an InitPlan)
+// and the sample side can use its location index.
 const PLACE_AND_INSIDE = `array(with recursive sub as (
     select id from locations where id = ?
     union select c.id from locations c join sub on c.parent_id = sub.id) select id from sub)`
@@ -39,10 +36,8 @@ const PLACE_AND_INSIDE = `array(with recursive sub as (
 export function filteredSamples(db: Knex, p: SampleListParams): Knex.QueryBuilder {
   const query = db('samples as s').leftJoin('locations as l', 'l.id', 's.location_id')
   const terms = (p.q ?? '').split(/\s+/).filter(Boolean).slice(0, 6)
-  for (const term of terms) {
-    const like = likeTerm(term)
-    query.where((w) => w.whereRaw(`s.search_text like ? escape '\\'`, [like]).orWhereRaw(`s.location_id = any(${PLACES_MATCHING})`, [like]))
-  }
+  // search_text also holds the codes and names of the sample's place and the places around it
+  for (const term of terms) query.whereRaw(`s.search_text like ? escape '\\'`, [likeTerm(term)])
   if (p.status === undefined) query.whereNot('s.status', 'retired')
   else if (p.status !== 'any') query.where('s.status', p.status)
   if (p.form) query.where('s.form', p.form)
