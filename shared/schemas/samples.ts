@@ -10,7 +10,7 @@ import { canonicalHCode, parseHazardStatements } from '../samples/ghs'
 import { parseNuclide, formatNuclide } from '../samples/nuclide'
 import { fractionSumProblem, isotopicMakeUp } from '../samples/composition'
 import { formulaProblem } from '../samples/formula'
-import { getElement } from '../physics/elements'
+import { getElement } from '../physics/index'
 
 const blankToNull = (v: unknown) => (v === '' || v === undefined ? null : v)
 
