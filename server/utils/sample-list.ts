@@ -1,5 +1,6 @@
 import type { Knex } from 'knex'
 import type { SampleListParams } from '../../shared/schemas/samples'
+import { CLP_VARIANTS } from '../../shared/samples/ghs'
 import { countRows } from './count'
 
 // The sample list's SQL, in one place for the list route, its CSV export and bench/registry.ts
@@ -51,7 +52,9 @@ export function filteredSamples(db: Knex, p: SampleListParams): Knex.QueryBuilde
   if (p.due === 'overdue') query.whereRaw('s.recertify_by <= current_date')
   else if (p.due) query.whereRaw('s.recertify_by <= current_date + ?::int', [Number(p.due)])
   if (p.hazard) {
-    if (/^H\d/.test(p.hazard)) query.whereRaw('s.hazard_statements @> array[?]::text[]', [p.hazard])
+    // a GHS code also finds its EU CLP refinements (H360 finds H360FD), not the other way round
+    const codes = [p.hazard, ...Object.keys(CLP_VARIANTS).filter((v) => CLP_VARIANTS[v]!.base === p.hazard)]
+    if (/^H\d/.test(p.hazard)) query.whereRaw('s.hazard_statements && ?::text[]', [codes])
     else query.whereRaw('s.hazard_kinds @> array[?]::text[]', [p.hazard])
   }
   return query

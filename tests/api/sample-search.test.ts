@@ -80,6 +80,8 @@ describe('the sample list', () => {
     ['hazard=toxic', ['pb']],
     ['hazard=pressurised', ['gas']],
     ['hazard=H360FD', ['pb']],
+    ['hazard=H360', ['pb']],
+    ['hazard=H360Df', []],
     ['hazard=h280', ['gas']],
   ])('filters %s', async (query, keys) => {
     expect(await codes(query.replace('ROOM', room.id))).toEqual(expected(...keys))
