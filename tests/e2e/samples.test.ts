@@ -115,6 +115,32 @@ describe('the sample registry in the browser', () => {
     await context.close()
   })
 
+  it('tells an editor when someone else saved first, and lets them load that version', async () => {
+    const context = await newContext(browser)
+    const page = await context.newPage()
+    await signInAs(page, 'manager')
+    await page.goto(`${samplePath}/edit`)
+    await waitForApp(page)
+    // another manager's save, made while this form is open
+    const status = await page.evaluate(async (path) => {
+      const current = await (await fetch(`/api${path}`)).json()
+      return (await fetch(`/api${path}`, { method: 'PATCH', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ version: current.version, notes: 'Moved to drawer 2 by a colleague' }) })).status
+    }, samplePath)
+    expect(status).toBe(200)
+    await page.fill('#s-name', `Nickel pair ${tag}, renamed`)
+    await page.getByRole('button', { name: 'Save changes' }).click()
+    await page.getByTestId('conflict').waitFor()
+    await expect(page.getByTestId('conflict').isVisible()).resolves.toBe(true)
+    expect(await page.getByTestId('conflict').evaluate((el) => el.getBoundingClientRect().top >= 0 && el.getBoundingClientRect().bottom <= window.innerHeight)).toBe(true)
+    await page.getByRole('button', { name: 'Load the current version' }).click()
+    await expect(page.inputValue('#s-notes')).resolves.toBe('Moved to drawer 2 by a colleague')
+    await page.fill('#s-name', `Nickel pair ${tag}, renamed`)
+    await Promise.all([page.waitForURL((u) => u.pathname === samplePath), page.getByRole('button', { name: 'Save changes' }).click()])
+    await page.getByRole('heading', { level: 1, name: `Nickel pair ${tag}, renamed` }).waitFor()
+    await expect(page.getByTestId('history').innerText()).resolves.toContain(`Nickel pair ${tag} → Nickel pair ${tag}, renamed`)
+    await context.close()
+  })
+
   it('shows the caution box of a radioactive sample, at desktop and phone width', async () => {
     for (const size of ['desktop', 'phone'] as const) {
       const context = await newContext(browser, size)
