@@ -71,7 +71,7 @@ export function orderSamples(query: Knex.QueryBuilder, sort: string | undefined)
 }
 
 // The components of each listed sample as [z, mass number, fraction] triples; PostgreSQL
-// evaluates this after the sort and LIMIT, for the rows of the page only.
+// evaluates this after the sort and LIMIT, for the rows of the page only (25 sub-plan loops).
 const COMPOSITION = `(select coalesce(json_agg(json_build_array(c.z, c.mass_number, c.fraction) order by c.position), '[]') from sample_components c where c.sample_id = s.id) as composition`
 
 export const LIST_COLUMNS = [
@@ -104,13 +104,17 @@ export interface SampleListRow {
   composition: [number, number | null, number][]
 }
 
-/** One page of the list and the count of all matches: two statements, run side by side. */
+/**
+ * One page of the list and the count of all matches, in one statement: the matching rows are
+ * found once and counted by a window over them (two statements read the same rows twice). Only a
+ * page past the end, which has no row to carry the count, asks for the count on its own.
+ */
 export async function samplePage(db: Knex, p: SampleListParams): Promise<{ rows: SampleListRow[]; total: number }> {
-  const page = orderSamples(filteredSamples(db, p).select(...LIST_COLUMNS, db.raw(COMPOSITION)), p.sort)
+  const rows = (await orderSamples(filteredSamples(db, p).select(...LIST_COLUMNS, db.raw(COMPOSITION), db.raw('count(*) over () as total')), p.sort)
     .limit(p.pageSize)
-    .offset((p.page - 1) * p.pageSize)
-  const [rows, total] = await Promise.all([page, countRows(filteredSamples(db, p))])
-  return { rows: rows as SampleListRow[], total }
+    .offset((p.page - 1) * p.pageSize)) as (SampleListRow & { total: string })[]
+  if (rows.length) return { rows, total: Number(rows[0]!.total) }
+  return { rows: [], total: p.page > 1 ? await countRows(filteredSamples(db, p)) : 0 }
 }
 
 /** A list row as the API answers it. */
