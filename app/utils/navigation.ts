@@ -11,6 +11,7 @@ export const NAVIGATION: NavItem[] = [
   { to: '/', label: 'Overview', capability: null },
   { to: '/samples', label: 'Samples', capability: 'readSamples' },
   { to: '/species', label: 'Species', capability: 'lookUpSpecies' },
+  { to: '/species/registry', label: 'Recorded species', capability: 'lookUpSpecies' },
   { to: '/audit', label: 'Audit trail', capability: 'readAudit' },
   { to: '/people', label: 'People', capability: 'managePeople' },
 ]

@@ -1,6 +1,6 @@
 import knexFactory, { type Knex } from 'knex'
 import pg from 'pg'
-import type { AuditRow, DatasheetRow, InvitationRow, LocationRow, SampleComponentRow, SampleRow, ScfCacheRow, SessionRow, SignInFailureRow, UserRow } from '#shared/types/db'
+import type { AuditRow, DatasheetRow, InvitationRow, LocationRow, SampleComponentRow, SampleRow, SampleSpeciesRow, ScfCacheRow, SessionRow, SignInFailureRow, SpeciesResultRow, SpeciesRow, UserRow } from '#shared/types/db'
 
 // Typed tables: `db('users')` knows its columns. Declared here, beside useDb, so every
 // project that compiles a route (the server's and the pages' type inference) sees it.
@@ -16,6 +16,9 @@ declare module 'knex/types/tables' {
     sample_components: SampleComponentRow
     datasheets: DatasheetRow
     species_scf_cache: ScfCacheRow
+    species: SpeciesRow
+    species_results: SpeciesResultRow
+    sample_species: SampleSpeciesRow
   }
 }
 

@@ -135,3 +135,34 @@ export interface ScfCacheRow {
   seconds: number
   computed_at: Date
 }
+
+export interface SpeciesRow {
+  id: string
+  z: number
+  charge: number
+  mass_number: number | null
+  label: string
+  spectroscopic: string
+  symbol: string
+  element_name: string
+  isoelectronic: string | null
+  created_by: string | null
+  created_at: Date
+}
+
+export interface SpeciesResultRow {
+  id: string
+  species_id: string
+  engine_version: string
+  methods: string[]
+  result: unknown
+  recorded_by: string | null
+  recorded_at: Date
+}
+
+export interface SampleSpeciesRow {
+  sample_id: string
+  species_id: string
+  linked_by: string | null
+  linked_at: Date
+}
