@@ -4,17 +4,11 @@
 //   the endpoint: GET /api/samples with a search term and a filter, signed in, over HTTP;
 //   the floor:    the same SQL (the list route's own query builder) run straight through Knex,
 // interleaved in the same run. Target: endpoint p95 ≤ 1.5 × floor p95, and under 50 ms.
-import { mkdtempSync, chmodSync, rmSync } from 'node:fs'
-import os from 'node:os'
-import path from 'node:path'
-import knexFactory, { type Knex } from 'knex'
-import { ensureBuild, dbTask, ROOT } from '../scripts/lib/setup.mjs'
-import { freePort, startChild, waitFor } from '../scripts/lib/proc.mjs'
-import { startServices } from '../scripts/lib/services.mjs'
+import type { Knex } from 'knex'
+import { percentile, runBench, withStack } from './lib/stack'
 import { SampleBody, SampleListQuery } from '../shared/schemas/samples'
 import { samplePage } from '../server/utils/sample-list'
 import { componentRows, sampleColumns } from '../server/utils/sample-columns'
-import { DEMO_PEOPLE } from '../seeds/01_people'
 
 const SAMPLES = 100_000
 const ROUNDS = 400
@@ -76,33 +70,11 @@ async function generate(db: Knex): Promise<void> {
   console.log(`Generated ${SAMPLES.toLocaleString('en')} samples in ${((performance.now() - started) / 1000).toFixed(1)} s`)
 }
 
-function p95(times: number[]): number {
-  const sorted = [...times].sort((a, b) => a - b)
-  return sorted[Math.ceil(sorted.length * 0.95) - 1]!
-}
+const p95 = (times: number[]) => percentile(times, 95)
 
 async function main(): Promise<number> {
-  const tmp = mkdtempSync(path.join(os.tmpdir(), 'ionfolio-bench-'))
-  chmodSync(tmp, 0o755)
-  const ports = { postgres: await freePort(), s3: await freePort(), smtp: await freePort(), app: await freePort() }
-  const services = await startServices({ storage: tmp, ports, database: 'ionfolio_bench', mail: 'spool' })
-  let app: ReturnType<typeof startChild> | null = null
-  const db = knexFactory({ client: 'pg', connection: services.env.NUXT_DATABASE_URL, pool: { min: 0, max: 10 } })
-  try {
-    await dbTask(['migrate'], services.env)
-    await dbTask(['seed'], services.env)
-    await generate(db)
-    ensureBuild()
-    const base = `http://127.0.0.1:${ports.app}`
-    app = startChild(process.execPath, [path.join(ROOT, '.output', 'server', 'index.mjs')], {
-      prefix: 'app',
-      env: { ...process.env, ...services.env, NODE_ENV: 'production', HOST: '127.0.0.1', PORT: String(ports.app), NUXT_PUBLIC_BASE_URL: base },
-    })
-    await waitFor(async () => (await fetch(`${base}/api/health`)).ok, { timeoutMs: 60_000, what: 'the app server' })
-
-    const manager = DEMO_PEOPLE.find((p) => p.role === 'manager')!
-    const signIn = await fetch(`${base}/api/auth/sign-in`, { method: 'POST', headers: { 'content-type': 'application/json', origin: base }, body: JSON.stringify({ email: manager.email, password: manager.password }) })
-    const cookie = signIn.headers.getSetCookie().map((c) => c.split(';')[0]).join('; ')
+  return withStack(async ({ base, db, cookieOf }) => {
+    const cookie = await cookieOf('manager')
     const url = `${base}/api/samples?${new URLSearchParams(QUERY)}`
     const params = SampleListQuery.parse(QUERY)
 
@@ -146,21 +118,7 @@ Sample list at ${SAMPLES.toLocaleString('en')} samples: q=${QUERY.q}, form=${QUE
   endpoint p95                ${e.toFixed(2)} ms (target < ${TARGET_MS} ms)
   ${ok ? 'PASS' : 'FAIL'}`)
     return ok ? 0 : 1
-  } finally {
-    await db.destroy()
-    if (app && app.exitCode === null) {
-      app.kill('SIGTERM')
-      await (app as unknown as { exited: Promise<number> }).exited
-    }
-    await services.stop()
-    rmSync(tmp, { recursive: true, force: true })
-  }
+  }, generate)
 }
 
-main().then(
-  (code) => process.exit(code),
-  (e: unknown) => {
-    console.error(e instanceof Error ? e.message : e)
-    process.exit(1)
-  },
-)
+runBench(main)
