@@ -1,5 +1,5 @@
 // Database chores for the start/test scripts and for contributors:
-//   tsx scripts/db.ts migrate | rollback | status | seed [--if-empty] | make NAME
+//   tsx scripts/db.ts migrate | rollback | status | seed | make NAME
 import knexFactory from 'knex'
 import config from '../knex.config'
 
@@ -25,13 +25,9 @@ async function main(): Promise<void> {
       break
     }
     case 'seed': {
-      if (rest.includes('--if-empty')) {
-        const { count } = (await knex('users').count<{ count: string }[]>({ count: '*' }))[0]!
-        if (Number(count) > 0) {
-          console.log('Demo data already present: keeping it')
-          break
-        }
-      }
+      // Every seed file adds its part of the demo only where that part is still missing (people
+      // by e-mail, the stock while there are no samples), so running them again keeps the data of
+      // the last run and a database made before a seed existed still gets that seed's part.
       const [files] = await knex.seed.run()
       console.log(`Ran ${files.length} seed file(s)`)
       break
@@ -44,7 +40,7 @@ async function main(): Promise<void> {
       break
     }
     default:
-      throw new Error('Usage: tsx scripts/db.ts migrate | rollback | status | seed [--if-empty] | make NAME')
+      throw new Error('Usage: tsx scripts/db.ts migrate | rollback | status | seed | make NAME')
   }
 }
 

@@ -46,7 +46,7 @@ process.on('SIGTERM', () => stop(0))
 
 try {
   await dbTask(['migrate'], services.env)
-  await dbTask(['seed', '--if-empty'], services.env)
+  await dbTask(['seed'], services.env)
   ensureBuild()
 } catch (e) {
   console.error(e.message)

@@ -68,9 +68,3 @@ export function isDatabaseUnavailable(error: unknown): boolean {
   }
   return false
 }
-
-/** The row count of a (filtered, unordered) query. */
-export async function countRows(query: Knex.QueryBuilder): Promise<number> {
-  const row = (await query.clone().clearSelect().clearOrder().count({ count: '*' }).first()) as { count: string | number } | undefined
-  return Number(row?.count ?? 0)
-}

@@ -1,6 +1,7 @@
 import type { Knex } from 'knex'
-import type { SampleListParams } from '#shared/schemas/samples'
-import { countRows } from './db'
+import type { SampleListParams } from '../../shared/schemas/samples'
+import { CLP_VARIANTS } from '../../shared/samples/ghs'
+import { countRows } from './count'
 
 // The sample list's SQL, in one place for the list route, its CSV export and bench/registry.ts
 // (which times this same SQL straight through Knex). Plain imports only, no Nitro auto-imports.
@@ -26,11 +27,8 @@ function likeTerm(term: string): string {
   return `%${term.toLowerCase().replace(/[\\%_]/g, (c) => `\\${c}`)}%`
 }
 
-// The places whose code or name matches, with everything inside them. As `= any(array(…))` the
-// set is computed once (an InitPlan) and the sample side can use its location index.
-const PLACES_MATCHING = `array(with recursive hit as (
-    select id from locations where lower(code || ' ' || name) like ? escape '\\'
-    union select c.id from locations c join hit on c.parent_id = hit.id) select id from hit)`
+// A place and everything inside it. As `= any(array(…))` the set is computed once (an InitPlan)
+// and the sample side can use its location index.
 const PLACE_AND_INSIDE = `array(with recursive sub as (
     select id from locations where id = ?
     union select c.id from locations c join sub on c.parent_id = sub.id) select id from sub)`
@@ -39,10 +37,8 @@ const PLACE_AND_INSIDE = `array(with recursive sub as (
 export function filteredSamples(db: Knex, p: SampleListParams): Knex.QueryBuilder {
   const query = db('samples as s').leftJoin('locations as l', 'l.id', 's.location_id')
   const terms = (p.q ?? '').split(/\s+/).filter(Boolean).slice(0, 6)
-  for (const term of terms) {
-    const like = likeTerm(term)
-    query.where((w) => w.whereRaw(`s.search_text like ? escape '\\'`, [like]).orWhereRaw(`s.location_id = any(${PLACES_MATCHING})`, [like]))
-  }
+  // search_text also holds the codes and names of the sample's place and the places around it
+  for (const term of terms) query.whereRaw(`s.search_text like ? escape '\\'`, [likeTerm(term)])
   if (p.status === undefined) query.whereNot('s.status', 'retired')
   else if (p.status !== 'any') query.where('s.status', p.status)
   if (p.form) query.where('s.form', p.form)
@@ -56,7 +52,9 @@ export function filteredSamples(db: Knex, p: SampleListParams): Knex.QueryBuilde
   if (p.due === 'overdue') query.whereRaw('s.recertify_by <= current_date')
   else if (p.due) query.whereRaw('s.recertify_by <= current_date + ?::int', [Number(p.due)])
   if (p.hazard) {
-    if (/^H\d/.test(p.hazard)) query.whereRaw('s.hazard_statements @> array[?]::text[]', [p.hazard])
+    // a GHS code also finds its EU CLP refinements (H360 finds H360FD), not the other way round
+    const codes = [p.hazard, ...Object.keys(CLP_VARIANTS).filter((v) => CLP_VARIANTS[v]!.base === p.hazard)]
+    if (/^H\d/.test(p.hazard)) query.whereRaw('s.hazard_statements && ?::text[]', [codes])
     else query.whereRaw('s.hazard_kinds @> array[?]::text[]', [p.hazard])
   }
   return query
@@ -73,7 +71,7 @@ export function orderSamples(query: Knex.QueryBuilder, sort: string | undefined)
 }
 
 // The components of each listed sample as [z, mass number, fraction] triples; PostgreSQL
-// evaluates this after the sort and LIMIT, for the rows of the page only.
+// evaluates this after the sort and LIMIT, for the rows of the page only (25 sub-plan loops).
 const COMPOSITION = `(select coalesce(json_agg(json_build_array(c.z, c.mass_number, c.fraction) order by c.position), '[]') from sample_components c where c.sample_id = s.id) as composition`
 
 export const LIST_COLUMNS = [
@@ -106,13 +104,17 @@ export interface SampleListRow {
   composition: [number, number | null, number][]
 }
 
-/** One page of the list and the count of all matches: two statements, run side by side. */
+/**
+ * One page of the list and the count of all matches, in one statement: the matching rows are
+ * found once and counted by a window over them (two statements read the same rows twice). Only a
+ * page past the end, which has no row to carry the count, asks for the count on its own.
+ */
 export async function samplePage(db: Knex, p: SampleListParams): Promise<{ rows: SampleListRow[]; total: number }> {
-  const page = orderSamples(filteredSamples(db, p).select(...LIST_COLUMNS, db.raw(COMPOSITION)), p.sort)
+  const rows = (await orderSamples(filteredSamples(db, p).select(...LIST_COLUMNS, db.raw(COMPOSITION), db.raw('count(*) over () as total')), p.sort)
     .limit(p.pageSize)
-    .offset((p.page - 1) * p.pageSize)
-  const [rows, total] = await Promise.all([page, countRows(filteredSamples(db, p))])
-  return { rows: rows as SampleListRow[], total }
+    .offset((p.page - 1) * p.pageSize)) as (SampleListRow & { total: string })[]
+  if (rows.length) return { rows, total: Number(rows[0]!.total) }
+  return { rows: [], total: p.page > 1 ? await countRows(filteredSamples(db, p)) : 0 }
 }
 
 /** A list row as the API answers it. */

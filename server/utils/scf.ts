@@ -10,6 +10,25 @@ type Solved = ScfSpeciesEstimates & { seconds: number }
 let pool: Piscina | null = null
 const inFlight = new Map<string, Promise<ScfSpeciesEstimates>>()
 
+// A solved species never changes for a given engine version (the cache key of the table), so a
+// copy in memory is as good as the row; the oldest entries go first once it is full.
+const MEMORY_LIMIT = 2_000
+const memory = new Map<string, ScfSpeciesEstimates>()
+function remember(key: string, value: ScfSpeciesEstimates): void {
+  if (memory.size >= MEMORY_LIMIT) memory.delete(memory.keys().next().value!)
+  memory.set(key, value)
+}
+
+/** The cached SCF estimates of (z, charge): from memory, else from PostgreSQL. */
+export async function cachedScf(z: number, charge: number): Promise<ScfSpeciesEstimates | null> {
+  const key = `${z}:${charge}`
+  const hit = memory.get(key)
+  if (hit) return hit
+  const row = await readScfCache(useDb(), z, charge)
+  if (row) remember(key, row)
+  return row
+}
+
 function workerFile(): string | null {
   // The worker is bundled next to the built server; look up from this chunk for workers/scf.mjs.
   let dir = path.dirname(fileURLToPath(import.meta.url))
@@ -48,6 +67,7 @@ export function computeScf(z: number, charge: number): Promise<ScfSpeciesEstimat
       const solved = (await usePool().run({ z, charge })) as Solved
       const { seconds, ...result } = solved
       await writeScfCache(useDb(), z, charge, result, seconds)
+      remember(key, result)
       return result
     })().finally(() => inFlight.delete(key))
     inFlight.set(key, job)
@@ -68,7 +88,7 @@ export type ScfLookup =
  * most `waitMs` (it goes on in the background and fills the cache when it takes longer).
  */
 export async function scfForLookup(z: number, charge: number, waitMs = 1_500): Promise<ScfLookup> {
-  const cached = await readScfCache(useDb(), z, charge)
+  const cached = await cachedScf(z, charge)
   if (cached) return { status: 'cached', estimates: cached }
   let job: Promise<ScfSpeciesEstimates>
   try {

@@ -10,7 +10,14 @@ export async function startSession(event: H3Event, userId: string): Promise<void
 /** Ends the caller's session and clears the cookie. */
 export async function endSession(event: H3Event): Promise<void> {
   const lucia = useLucia()
-  if (event.context.session) await lucia.invalidateSession(event.context.session.id)
+  const session = event.context.session
+  if (session) {
+    await useDb().transaction(async (trx) => {
+      await trx('sessions').where({ id: session.id }).delete()
+      await trx.raw(...sessionEndedNotice(session.id))
+    })
+    forgetLocally('s', session.id)
+  }
   appendResponseHeader(event, 'Set-Cookie', lucia.createBlankSessionCookie().serialize())
   event.context.session = null
   event.context.user = null

@@ -4,7 +4,7 @@
  * isotope, and the sample's mean atomic mass. Isotope masses and natural abundances come from the
  * species engine's nuclide data (npm chemical-elements, NIST isotopic compositions).
  */
-import { getElement, ISOTOPE_SOURCE } from '../physics/elements'
+import { getElement, ISOTOPE_SOURCE } from '../physics/index'
 import type { FractionBasis } from './vocabulary'
 
 export { ISOTOPE_SOURCE }

@@ -4,7 +4,7 @@
  * enriched isotope, "enr e[±u]%" — e.g. "Ca-48 1 enr 97.8±0.2%" or "Ca-48 0.2 enr 97.8%; C 0.2; O 0.6".
  * A symbol without a mass number is the natural element. The basis (atom or mass) has its own column.
  */
-import { getElement } from '../physics/elements'
+import { getElement } from '../physics/index'
 import type { ComponentBody } from '../schemas/samples'
 
 export const CSV_COLUMNS = [

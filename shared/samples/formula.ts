@@ -1,4 +1,4 @@
-import { getElement } from '../physics/elements'
+import { getElement } from '../physics/index'
 
 /**
  * Checks a chemical formula as labs write it: element symbols with optional counts, parentheses

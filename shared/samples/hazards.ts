@@ -6,7 +6,7 @@
  * great deal) and they only ever add cautions to what the record states; they do not replace
  * the supplier's safety data sheet or the institution's own assessment.
  */
-import { getElement } from '../physics/elements'
+import { getElement } from '../physics/index'
 import { baseHCode } from './ghs'
 import { parseNuclide } from './nuclide'
 import type { SampleForm } from './vocabulary'

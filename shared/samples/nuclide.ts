@@ -1,4 +1,4 @@
-import { getElement } from '../physics/elements'
+import { getElement } from '../physics/index'
 
 export interface NuclideRef {
   z: number

@@ -10,7 +10,7 @@ import { canonicalHCode, parseHazardStatements } from '../samples/ghs'
 import { parseNuclide, formatNuclide } from '../samples/nuclide'
 import { fractionSumProblem, isotopicMakeUp } from '../samples/composition'
 import { formulaProblem } from '../samples/formula'
-import { getElement } from '../physics/elements'
+import { getElement } from '../physics/index'
 
 const blankToNull = (v: unknown) => (v === '' || v === undefined ? null : v)
 
@@ -58,6 +58,26 @@ const nuclide = z
   .refine((v) => v === null || parseNuclide(v) !== null, 'Name a known nuclide, e.g. U-238 or 241Am')
   .transform((v) => (v === null ? null : formatNuclide(parseNuclide(v)!)))
 
+/** The rules of a composition as a whole: no repeats, one basis, real isotopes, a sum of 1. */
+function checkComponents(components: ComponentBody[], ctx: z.RefinementCtx) {
+  const issue = (path: (string | number)[], message: string) => ctx.addIssue({ code: 'custom', path, message })
+  const seen = new Set<string>()
+  components.forEach((c, i) => {
+    const element = getElement(c.z)
+    if (!element) return
+    const key = `${c.z}-${c.massNumber ?? 'nat'}`
+    if (seen.has(key)) issue([i, c.massNumber === null ? 'z' : 'massNumber'], `${c.massNumber ?? ''}${element.symbol}${c.massNumber === null ? ' (natural)' : ''} is listed twice`)
+    seen.add(key)
+    if (c.massNumber === null && c.enrichmentPercent !== null) issue([i, 'enrichmentPercent'], 'Enrichment belongs to a named isotope; leave it empty for the natural element')
+    if (c.enrichmentUncertainty !== null && c.enrichmentPercent === null) issue([i, 'enrichmentUncertainty'], 'Give the enrichment this uncertainty belongs to')
+    if (i > 0 && c.basis !== components[0]!.basis) issue([i, 'basis'], 'Give every fraction on the same basis (all atom or all mass fractions)')
+    const makeUp = isotopicMakeUp(c.z, c.massNumber, c.enrichmentPercent)
+    if (!makeUp.ok) issue([i, c.massNumber === null ? 'z' : 'massNumber'], makeUp.message)
+  })
+  const sum = fractionSumProblem(components)
+  if (sum) issue([], sum)
+}
+
 // Every field a person fills in, without defaults, so that a partial update leaves out what it
 // does not change. Cross-field rules are in `checkSample`.
 const SampleFields = z.strictObject({
@@ -82,38 +102,37 @@ const SampleFields = z.strictObject({
   nuclide,
   activityBq: quantity('The activity', (n) => n.gt(0, 'The activity is more than 0 Bq')),
   notes: text(4000),
-  components: z.array(ComponentSchema).max(40, 'At most 40 components'),
+  components: z.array(ComponentSchema).max(40, 'At most 40 components').superRefine(checkComponents),
 })
 
 type Fields = z.output<typeof SampleFields>
 
-function checkSample(s: Fields, ctx: z.RefinementCtx) {
-  const issue = (path: (string | number)[], message: string) => ctx.addIssue({ code: 'custom', path, message })
-  if (s.arealDensityUncertainty !== null && s.arealDensity === null) issue(['arealDensityUncertainty'], 'Give the areal density the uncertainty belongs to')
-  if (s.receivedOn && s.recertifyBy && s.recertifyBy < s.receivedOn) issue(['recertifyBy'], 'The re-certify-by date cannot be before the date received')
-  if (s.radioactive) {
-    if (!s.nuclide) issue(['nuclide'], 'A radioactive sample needs its nuclide, e.g. U-238')
-    if (s.activityBq === null) issue(['activityBq'], 'A radioactive sample needs its activity in Bq')
-  } else {
-    if (s.nuclide) issue(['nuclide'], 'Tick "radioactive", or leave the nuclide empty')
-    if (s.activityBq !== null) issue(['activityBq'], 'Tick "radioactive", or leave the activity empty')
-  }
-  const seen = new Set<string>()
-  s.components.forEach((c, i) => {
-    const element = getElement(c.z)
-    if (!element) return
-    const key = `${c.z}-${c.massNumber ?? 'nat'}`
-    if (seen.has(key)) issue(['components', i, c.massNumber === null ? 'z' : 'massNumber'], `${c.massNumber ?? ''}${element.symbol}${c.massNumber === null ? ' (natural)' : ''} is listed twice`)
-    seen.add(key)
-    if (c.massNumber === null && c.enrichmentPercent !== null) issue(['components', i, 'enrichmentPercent'], 'Enrichment belongs to a named isotope; leave it empty for the natural element')
-    if (c.enrichmentUncertainty !== null && c.enrichmentPercent === null) issue(['components', i, 'enrichmentUncertainty'], 'Give the enrichment this uncertainty belongs to')
-    if (i > 0 && c.basis !== s.components[0]!.basis) issue(['components', i, 'basis'], 'Give every fraction on the same basis (all atom or all mass fractions)')
-    const makeUp = isotopicMakeUp(c.z, c.massNumber, c.enrichmentPercent)
-    if (!makeUp.ok) issue(['components', i, c.massNumber === null ? 'z' : 'massNumber'], makeUp.message)
-  })
-  const sum = fractionSumProblem(s.components)
-  if (sum) issue(['components'], sum)
+// Rules across fields. Each runs as soon as the fields it reads have parsed, so a wrong value
+// elsewhere (a form, a date) does not hide it.
+function rule(fields: string[], check: (s: Fields, issue: (path: string, message: string) => void) => void) {
+  return [
+    (s: Fields, ctx: z.RefinementCtx) => {
+      if (typeof s === 'object' && s !== null) check(s, (path, message) => ctx.addIssue({ code: 'custom', path: [path], message }))
+    },
+    { when: (payload: { issues: readonly { path?: readonly PropertyKey[] }[] }) => !payload.issues.some((i) => fields.includes(String(i.path?.[0]))) },
+  ] as const
 }
+
+const UNCERTAINTY_NEEDS_VALUE = rule(['arealDensity', 'arealDensityUncertainty'], (s, issue) => {
+  if (s.arealDensityUncertainty !== null && s.arealDensity === null) issue('arealDensityUncertainty', 'Give the areal density the uncertainty belongs to')
+})
+const DATES_IN_ORDER = rule(['receivedOn', 'recertifyBy'], (s, issue) => {
+  if (s.receivedOn && s.recertifyBy && s.recertifyBy < s.receivedOn) issue('recertifyBy', 'The re-certify-by date cannot be before the date received')
+})
+const RADIOACTIVE_NEEDS_NUCLIDE = rule(['radioactive', 'nuclide', 'activityBq'], (s, issue) => {
+  if (s.radioactive) {
+    if (!s.nuclide) issue('nuclide', 'A radioactive sample needs its nuclide, e.g. U-238')
+    if (s.activityBq === null) issue('activityBq', 'A radioactive sample needs its activity in Bq')
+  } else {
+    if (s.nuclide) issue('nuclide', 'Tick "radioactive", or leave the nuclide empty')
+    if (s.activityBq !== null) issue('activityBq', 'Tick "radioactive", or leave the activity empty')
+  }
+})
 
 /** A complete sample, as the form sends it and as POST /api/samples takes it. */
 export const SampleBody = SampleFields.extend({
@@ -136,7 +155,10 @@ export const SampleBody = SampleFields.extend({
   activityBq: SampleFields.shape.activityBq.optional().default(null),
   notes: SampleFields.shape.notes.optional().default(null),
   components: SampleFields.shape.components.optional().default([]),
-}).superRefine(checkSample)
+})
+  .superRefine(...UNCERTAINTY_NEEDS_VALUE)
+  .superRefine(...DATES_IN_ORDER)
+  .superRefine(...RADIOACTIVE_NEEDS_NUCLIDE)
 export type SampleInput = z.input<typeof SampleBody>
 export type SampleData = z.output<typeof SampleBody>
 

@@ -33,6 +33,8 @@ const MATRIX: Array<{ route: string; method: string; body?: unknown; expect: Rec
   { method: 'POST', route: '/api/samples/import', body: 'name,material,form\n', expect: { manager: 400, scientist: 403, technician: 403, auditor: 403, anonymous: 401 } },
   { method: 'GET', route: '/api/locations', expect: { manager: 200, scientist: 200, technician: 200, auditor: 200, anonymous: 401 } },
   { method: 'POST', route: '/api/locations', body: { kind: 'attic' }, expect: { manager: 400, scientist: 403, technician: 403, auditor: 403, anonymous: 401 } },
+  { method: 'GET', route: `/api/samples/${randomUUID()}/species`, expect: { manager: 404, scientist: 404, technician: 404, auditor: 404, anonymous: 401 } },
+  { method: 'GET', route: '/api/overview', expect: { manager: 200, scientist: 200, technician: 200, auditor: 200, anonymous: 401 } },
   { method: 'GET', route: '/api/species/lookup?q=Fe', expect: { manager: 200, scientist: 200, technician: 200, auditor: 200, anonymous: 401 } },
   { method: 'GET', route: '/api/species/series?z=26', expect: { manager: 200, scientist: 200, technician: 200, auditor: 200, anonymous: 401 } },
   { method: 'GET', route: '/api/species/compare?element=Fe&from=0&to=2', expect: { manager: 200, scientist: 200, technician: 200, auditor: 200, anonymous: 401 } },

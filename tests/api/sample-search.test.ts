@@ -80,6 +80,8 @@ describe('the sample list', () => {
     ['hazard=toxic', ['pb']],
     ['hazard=pressurised', ['gas']],
     ['hazard=H360FD', ['pb']],
+    ['hazard=H360', ['pb']],
+    ['hazard=H360Df', []],
     ['hazard=h280', ['gas']],
   ])('filters %s', async (query, keys) => {
     expect(await codes(query.replace('ROOM', room.id))).toEqual(expected(...keys))
@@ -99,6 +101,8 @@ describe('the sample list', () => {
     const page2 = await manager.get(`/api/samples?q=LOT-${tag}&sort=name&pageSize=1&page=2`)
     expect(page2.body).toMatchObject({ total: 4, page: 2, pageSize: 1 })
     expect(page2.body.items.map((i: { name: string }) => i.name)).toEqual(['Carbon stripper foil'])
+    const past = await manager.get(`/api/samples?q=LOT-${tag}&pageSize=10&page=3`)
+    expect(past.body).toMatchObject({ items: [], total: 4, page: 3 })
   })
 
   it('exports the same filtered list as CSV, composition included', async () => {

@@ -157,3 +157,14 @@ describe('comparing species', () => {
     expect(lines).toHaveLength(4)
   })
 })
+
+describe('linking from the sample side', () => {
+  it('lists the species a sample can source', async () => {
+    const sample = await someSample(c.manager, 'Ca')
+    const species = (await c.manager.post('/api/species', { species: '48Ca 10+' })).body
+    expect((await c.manager.post(`/api/species/${species.id}/samples`, { sampleId: sample.id })).status).toBe(201)
+    const r = await c.auditor.get(`/api/samples/${sample.id}/species`)
+    expect(r.status).toBe(200)
+    expect(r.body.map((s: { label: string }) => s.label)).toContain('48Ca10+')
+  })
+})

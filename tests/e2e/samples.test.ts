@@ -86,8 +86,8 @@ describe('the sample registry in the browser', () => {
     await waitForApp(page)
     await snap(page, 'samples-list-desktop')
     await page.getByTestId('sample-search').fill(`pair ${tag}`)
-    await page.waitForFunction(() => document.querySelector('[data-testid=row-count]')?.textContent?.includes('of 1'))
-    expect(new URL(page.url()).searchParams.get('q')).toBe(`pair ${tag}`)
+    await page.waitForFunction(() => document.querySelector('[data-testid=row-count]')?.textContent?.trim() === '1–1 of 1')
+    await page.waitForURL((u) => u.searchParams.get('q') === `pair ${tag}`)
     await page.getByRole('link', { name: /^S-\d{4}-\d{6}$/ }).click()
     await page.waitForURL((u) => u.pathname === samplePath)
     await page.goto(`/samples?q=${encodeURIComponent(`no such thing ${tag}`)}`)
@@ -112,6 +112,32 @@ describe('the sample registry in the browser', () => {
     await expect(page.getByRole('link', { name: 'Import CSV' }).count()).resolves.toBe(0)
     await page.goto('/samples/new')
     await expect(page.getByRole('heading', { level: 1 }).innerText()).resolves.toMatch(/Not part of your role/)
+    await context.close()
+  })
+
+  it('tells an editor when someone else saved first, and lets them load that version', async () => {
+    const context = await newContext(browser)
+    const page = await context.newPage()
+    await signInAs(page, 'manager')
+    await page.goto(`${samplePath}/edit`)
+    await waitForApp(page)
+    // another manager's save, made while this form is open
+    const status = await page.evaluate(async (path) => {
+      const current = await (await fetch(`/api${path}`)).json()
+      return (await fetch(`/api${path}`, { method: 'PATCH', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ version: current.version, notes: 'Moved to drawer 2 by a colleague' }) })).status
+    }, samplePath)
+    expect(status).toBe(200)
+    await page.fill('#s-name', `Nickel pair ${tag}, renamed`)
+    await page.getByRole('button', { name: 'Save changes' }).click()
+    await page.getByTestId('conflict').waitFor()
+    await expect(page.getByTestId('conflict').isVisible()).resolves.toBe(true)
+    expect(await page.getByTestId('conflict').evaluate((el) => el.getBoundingClientRect().top >= 0 && el.getBoundingClientRect().bottom <= window.innerHeight)).toBe(true)
+    await page.getByRole('button', { name: 'Load the current version' }).click()
+    await expect(page.inputValue('#s-notes')).resolves.toBe('Moved to drawer 2 by a colleague')
+    await page.fill('#s-name', `Nickel pair ${tag}, renamed`)
+    await Promise.all([page.waitForURL((u) => u.pathname === samplePath), page.getByRole('button', { name: 'Save changes' }).click()])
+    await page.getByRole('heading', { level: 1, name: `Nickel pair ${tag}, renamed` }).waitFor()
+    await expect(page.getByTestId('history').innerText()).resolves.toContain(`Nickel pair ${tag} → Nickel pair ${tag}, renamed`)
     await context.close()
   })
 

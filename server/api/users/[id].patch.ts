@@ -24,11 +24,14 @@ export default defineEventHandler(async (event) => {
     }
     const [after] = await trx('users').where({ id }).update(changes).returning(['id', 'email', 'name', 'role', 'active', 'created_at', 'deactivated_at'])
     if (body.active === false) await trx('sessions').where({ user_id: id }).delete()
+    // Every instance forgets its cached copy of this person's sessions when this commits.
+    await trx.raw(...userChangedNotice(id))
     const pick = (u: { role: string; active: boolean }) => ({ role: u.role, active: u.active })
     const action = body.active === false && before.active ? 'user.deactivated' : body.active === true && !before.active ? 'user.reactivated' : 'user.role-changed'
     await writeAudit(trx, event, { action, entityType: 'user', entityId: id, before: pick(before), after: pick(after) })
     return after
   })
 
+  forgetLocally('u', id)
   return { id: updated.id, email: updated.email, name: updated.name, role: updated.role, active: updated.active, createdAt: updated.created_at, deactivatedAt: updated.deactivated_at }
 })
