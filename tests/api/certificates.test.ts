@@ -217,6 +217,14 @@ describe('finding certificates', () => {
     expect(paged.body.total).toBeGreaterThan(1)
     expect((await c.auditor.get('/api/certificates?sort=bogus')).status).toBe(400)
   })
+
+  it('shows the newest certificates on the overview', async () => {
+    const sample = await certifiableSample(manager)
+    const cert = await issue(manager, 'sample', sample.id)
+    const overview = (await c.scientist.get('/api/overview')).body
+    expect(overview.certificates[0]).toMatchObject({ id: cert.id, number: cert.number, status: 'issued', subjectLabel: `${sample.code} ${sample.name}` })
+    expect(overview.certificates.length).toBeLessThanOrEqual(5)
+  })
 })
 
 describe('the object store and the rows agree', () => {

@@ -47,6 +47,10 @@ describe('certificates in the browser', () => {
     cert = (await manager.get(`/api/certificates/${id}`)).body
     await expect(page.getByTestId('content-digest').innerText()).resolves.toBe(cert.sha256)
     await snap(page, 'certificate-page-manager-desktop')
+    await page.goto('/')
+    await waitForApp(page)
+    await expect(page.getByTestId('overview-certificates').innerText()).resolves.toContain(cert.number)
+    await snap(page, 'overview-certificates-desktop')
     await context.close()
   })
 
