@@ -104,6 +104,21 @@ describe('certificates in the browser', () => {
     await context.close()
   })
 
+  it('lets a manager certify a recorded species from its page', async () => {
+    const recorded = await (await signedIn('scientist')).post('/api/species', { species: 'Ne 7+' })
+    expect([200, 201]).toContain(recorded.status)
+    const context = await newContext(browser)
+    const page = await context.newPage()
+    await signInAs(page, 'manager')
+    await page.goto(`/species/${recorded.body.id}`)
+    await waitForApp(page)
+    page.once('dialog', (d) => void d.accept())
+    await page.getByTestId('issue-certificate').click()
+    await page.getByTestId('certificate-notice').getByText(/is issued/).waitFor()
+    await snap(page, 'species-page-certificate-desktop')
+    await context.close()
+  })
+
   it('lets a manager revoke it with a reason, after which it verifies as revoked', async () => {
     const context = await newContext(browser, 'phone')
     const page = await context.newPage()
