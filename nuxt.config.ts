@@ -1,3 +1,8 @@
+import { fileURLToPath } from 'node:url'
+
+// The font files the PDFs embed (server/pdf/fonts.ts names the same subsets and weights).
+const fontFiles = (pkg: string) => fileURLToPath(new URL(`./node_modules/@fontsource/${pkg}/files`, import.meta.url))
+
 // Every setting has a working local default and is overridden at run time by the matching
 // NUXT_* environment variable (e.g. NUXT_DATABASE_URL, NUXT_S3_ENDPOINT, NUXT_SMTP_HOST), so
 // pointing the built server at managed services is configuration only.
@@ -58,6 +63,13 @@ export default defineNuxtConfig({
   },
   nitro: {
     experimental: { tasks: true },
+    // The daily notices (re-certification due, check-outs overdue, missed certificate notices),
+    // at 06:15 server time. Every instance runs it; the notices table lets each notice out once.
+    scheduledTasks: { '15 6 * * *': ['notices:daily'] },
+    serverAssets: [
+      { baseName: 'pdf-inter', dir: fontFiles('inter'), pattern: 'inter-{latin,latin-ext,greek}-{400,600}-normal.woff' },
+      { baseName: 'pdf-mono', dir: fontFiles('roboto-mono'), pattern: 'roboto-mono-{latin,latin-ext}-{400,700}-normal.woff' },
+    ],
     typescript: { tsConfig: { compilerOptions: { noUncheckedIndexedAccess: false } } },
   },
   typescript: {

@@ -12,6 +12,8 @@ export const NAVIGATION: NavItem[] = [
   { to: '/samples', label: 'Samples', capability: 'readSamples' },
   { to: '/species', label: 'Species', capability: 'lookUpSpecies' },
   { to: '/species/registry', label: 'Recorded species', capability: 'lookUpSpecies' },
+  { to: '/certificates', label: 'Certificates', capability: 'readCertificates' },
+  { to: '/scan', label: 'Scan', capability: 'custody' },
   { to: '/audit', label: 'Audit trail', capability: 'readAudit' },
   { to: '/people', label: 'People', capability: 'managePeople' },
 ]

@@ -24,6 +24,7 @@ export const CAN = {
   printLabels: ['manager', 'technician'],
   issueCertificates: ['manager'],
   readCertificates: everyone,
+  runNotices: ['manager'],
   readAudit: ['manager', 'auditor'],
   managePeople: ['manager'],
 } as const satisfies Record<string, readonly Role[]>

@@ -166,3 +166,60 @@ export interface SampleSpeciesRow {
   linked_by: string | null
   linked_at: Date
 }
+
+export interface CertificateRow {
+  id: string
+  number: string
+  subject_type: 'sample' | 'species'
+  subject_id: string
+  subject_label: string
+  version: number
+  status: 'issued' | 'superseded' | 'revoked'
+  payload: unknown
+  sha256: string
+  object_key: string
+  pdf_sha256: string
+  pdf_bytes: number
+  issued_by: string
+  issued_at: Date
+  /** DATE, as 'YYYY-MM-DD' */
+  valid_until: string | null
+  supersedes_id: string | null
+  correction_reason: string | null
+  superseded_by: string | null
+  superseded_at: Date | null
+  revoked_at: Date | null
+  revoked_by: string | null
+  revoke_reason: string | null
+}
+
+export interface CustodyEventRow {
+  id: number | string
+  sample_id: string
+  kind: 'moved' | 'checked_out' | 'checked_in' | 'consumed' | 'condition'
+  details: unknown
+  by: string | null
+  at: Date
+}
+
+export interface SampleCheckoutRow {
+  id: string
+  sample_id: string
+  holder: string
+  run: string
+  /** DATE, as 'YYYY-MM-DD' */
+  due_back: string
+  checked_out_by: string | null
+  checked_out_at: Date
+  checked_in_by: string | null
+  checked_in_at: Date | null
+}
+
+export interface NoticeRow {
+  id: number | string
+  kind: 'certificate_issued' | 'certificate_revoked' | 'recertification_due' | 'checkout_overdue'
+  key: string
+  recipients: string[]
+  subject: string
+  sent_at: Date
+}

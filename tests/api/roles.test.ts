@@ -43,6 +43,19 @@ const MATRIX: Array<{ route: string; method: string; body?: unknown; expect: Rec
   { method: 'GET', route: `/api/species/${randomUUID()}`, expect: { manager: 404, scientist: 404, technician: 404, auditor: 404, anonymous: 401 } },
   { method: 'POST', route: `/api/species/${randomUUID()}/samples`, body: { sampleId: randomUUID() }, expect: { manager: 404, scientist: 404, technician: 403, auditor: 403, anonymous: 401 } },
   { method: 'DELETE', route: `/api/species/${randomUUID()}/samples/${randomUUID()}`, expect: { manager: 404, scientist: 404, technician: 403, auditor: 403, anonymous: 401 } },
+  { method: 'GET', route: '/api/certificates', expect: { manager: 200, scientist: 200, technician: 200, auditor: 200, anonymous: 401 } },
+  { method: 'POST', route: '/api/certificates', body: { subjectType: 'crystal' }, expect: { manager: 400, scientist: 403, technician: 403, auditor: 403, anonymous: 401 } },
+  { method: 'GET', route: `/api/certificates/${randomUUID()}`, expect: { manager: 404, scientist: 404, technician: 404, auditor: 404, anonymous: 401 } },
+  { method: 'GET', route: `/api/certificates/${randomUUID()}/pdf`, expect: { manager: 404, scientist: 404, technician: 404, auditor: 404, anonymous: 401 } },
+  { method: 'POST', route: `/api/certificates/${randomUUID()}/supersede`, body: { reason: '' }, expect: { manager: 400, scientist: 403, technician: 403, auditor: 403, anonymous: 401 } },
+  { method: 'POST', route: `/api/certificates/${randomUUID()}/revoke`, body: { reason: '' }, expect: { manager: 400, scientist: 403, technician: 403, auditor: 403, anonymous: 401 } },
+  { method: 'GET', route: '/api/certificates/zip?from=2001-01-01&to=2001-01-02', expect: { manager: 200, scientist: 200, technician: 200, auditor: 200, anonymous: 401 } },
+  { method: 'GET', route: `/api/public/verify/C-1999-999999?digest=${'0'.repeat(64)}`, expect: { manager: 200, scientist: 200, technician: 200, auditor: 200, anonymous: 200 } },
+  { method: 'POST', route: '/api/labels', body: { sampleIds: [] }, expect: { manager: 400, scientist: 403, technician: 400, auditor: 403, anonymous: 401 } },
+  { method: 'POST', route: `/api/samples/${randomUUID()}/custody`, body: { action: 'teleport' }, expect: { manager: 400, scientist: 403, technician: 400, auditor: 403, anonymous: 401 } },
+  { method: 'POST', route: `/api/samples/${randomUUID()}/custody`, body: { action: 'condition', version: 1, note: 'fine' }, expect: { manager: 404, scientist: 403, technician: 404, auditor: 403, anonymous: 401 } },
+  { method: 'GET', route: `/api/samples/${randomUUID()}/custody`, expect: { manager: 404, scientist: 404, technician: 404, auditor: 404, anonymous: 401 } },
+  { method: 'POST', route: '/api/notices/run', expect: { manager: 200, scientist: 403, technician: 403, auditor: 403, anonymous: 401 } },
 ]
 
 const cases = MATRIX.flatMap((m) => (Object.keys(m.expect) as Who[]).map((who) => [m.method, m.route, who, m.expect[who], m.body] as const))

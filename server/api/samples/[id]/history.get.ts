@@ -4,7 +4,7 @@ import { IdParam } from '#shared/schemas/common'
 // What the audit trail holds about one sample, for everyone who may read the sample: who did
 // what and when, and which fields changed. The full trail (addresses, every record type) stays
 // with the roles that read the audit trail.
-const HIDDEN = new Set(['version', 'updatedAt', 'createdAt', 'location', 'hazardKinds'])
+const HIDDEN = new Set(['version', 'updatedAt', 'createdAt', 'location', 'hazardKinds', 'custody'])
 
 // A place is shown by its path, which people read; the record keeps the id.
 const placeOf = (r: Record<string, unknown>) => (r.location as { path?: string } | null)?.path ?? (r.locationId ? String(r.locationId) : null)

@@ -1,0 +1,28 @@
+import { timingSafeEqual } from 'node:crypto'
+import { z } from 'zod'
+import { CERTIFICATE_NUMBER_PATTERN, DIGEST_PATTERN } from '#shared/certificates/canonical'
+
+// Malformed input is not an error here: it simply names no certificate we issued.
+const Params = z.object({ number: z.string().max(40).catch('') })
+const Query = z.object({ digest: z.string().max(128).optional().catch(undefined) })
+
+const ANSWER = { issued: 'genuine', superseded: 'superseded', revoked: 'revoked' } as const
+const DUMMY = Buffer.alloc(32)
+
+// Public: is this certificate, with this digest, ours — and is it still current? The answer
+// is one word and nothing else. Without the matching digest every number is "unknown", so the
+// route tells nothing to someone who has not seen the certificate, and guessing a 256-bit
+// digest is hopeless; the per-address limit only keeps the route from being used to load the
+// database.
+export default defineEventHandler(async (event) => {
+  assertVerifyAllowed(event)
+  setResponseHeader(event, 'Cache-Control', 'no-store')
+  const { number } = paramsValid(event, Params)
+  const digest = (queryValid(event, Query).digest ?? '').trim().toLowerCase()
+  const row = CERTIFICATE_NUMBER_PATTERN.test(number) ? await useDb()('certificates').where({ number }).first('status', 'sha256') : undefined
+  const given = DIGEST_PATTERN.test(digest) ? Buffer.from(digest, 'hex') : DUMMY
+  const stored = row ? Buffer.from(row.sha256, 'hex') : DUMMY
+  // Compared in constant time even when there is nothing to compare with.
+  const matches = timingSafeEqual(given, stored) && given !== DUMMY && !!row
+  return { status: matches ? ANSWER[row!.status] : ('unknown' as const) }
+})

@@ -1,0 +1,113 @@
+import { describe, it, expect, beforeAll, afterAll } from 'vitest'
+import { everyone, type Client } from '../support/api'
+import { closeTestDb, testDb } from '../support/db'
+import { createSample } from '../support/samples'
+import { cropMm, inkBox, pdfPages, pdfText, renderPages, zbar } from '../support/pdf'
+
+let c: Awaited<ReturnType<typeof everyone>>
+let seeded: { id: string; code: string }[]
+beforeAll(async () => {
+  c = await everyone()
+  seeded = (await c.technician.get('/api/samples?pageSize=100&sort=code')).body.items.map((i: any) => ({ id: i.id, code: i.code }))
+})
+afterAll(closeTestDb)
+
+const MM = 72 / 25.4
+const base = () => process.env.IONFOLIO_TEST_BASE_URL!
+
+// The sheet as server/pdf/labels.ts lays it out: 3 × 10 labels of 50 × 25 mm, 56 mm and 27 mm
+// apart, from 24 mm and 14.5 mm.
+const slot = (i: number) => ({ x: 24 + (i % 3) * 56, y: 14.5 + Math.floor(i / 3) * 27, w: 50, h: 25 })
+
+async function labels(client: Client, sampleIds: string[], layout: 'single' | 'sheet') {
+  const r = await client.post('/api/labels', { sampleIds, layout })
+  expect(r.status, r.status === 200 ? '' : JSON.stringify(r.body)).toBe(200)
+  expect(r.headers.get('content-type')).toBe('application/pdf')
+  return r.body as Buffer
+}
+
+describe('a sheet of labels', () => {
+  it('decodes back, label by label with ZBar, to the scan URL of each sample in order', async () => {
+    const chosen = seeded.slice(0, 34)
+    expect(chosen.length).toBe(34)
+    const pdf = await labels(c.technician, chosen.map((s) => s.id), 'sheet')
+    const info = await pdfPages(pdf)
+    expect(info.pages).toBe(2)
+    expect(info.width).toBeCloseTo(210 * MM, 1)
+    expect(info.height).toBeCloseTo(297 * MM, 1)
+    const pages = await renderPages(pdf, 300)
+    const decoded: string[] = []
+    for (let i = 0; i < chosen.length; i++) {
+      const found = await zbar(cropMm(pages[Math.floor(i / 30)]!, 300, slot(i % 30)))
+      expect(found, `label ${i + 1} (${chosen[i]!.code})`).toHaveLength(1)
+      decoded.push(found[0]!)
+    }
+    expect(decoded).toEqual(chosen.map((s) => `${base()}/scan/${s.code}`))
+    const text = await pdfText(pdf)
+    for (const s of chosen) expect(text).toContain(s.code)
+  })
+
+  it('keeps all ink inside the printable area: ≥ 6.35 mm (¼ inch) from every edge (common practice, no source)', async () => {
+    const pdf = await labels(c.technician, seeded.slice(0, 30).map((s) => s.id), 'sheet')
+    const [page] = await renderPages(pdf, 100)
+    const box = inkBox(page!, 100)
+    for (const side of ['left', 'top', 'right', 'bottom'] as const) expect(box[side], side).toBeGreaterThanOrEqual(6.35)
+  })
+
+  it('prints the name, main species, pictogram codes and the radiation caution', async () => {
+    const uranium = (await c.technician.get('/api/samples?element=U&pageSize=1')).body.items[0]
+    const text = (await pdfText(await labels(c.technician, [uranium.id], 'sheet'))).replace(/\s+/g, ' ')
+    expect(text).toContain(uranium.code)
+    expect(text).toContain('RADIOACTIVE')
+    expect(text).toContain('U-238')
+    expect(text).toMatch(/GHS06/)
+  })
+
+  it('audits the printing: which samples, the layout and the print run', async () => {
+    const ids = seeded.slice(0, 3).map((s) => s.id)
+    await labels(c.manager, [...ids, ids[0]!], 'sheet')
+    const rows = await testDb()('audit_log').where({ action: 'sample.label-printed' }).whereIn('entity_id', ids).orderBy('id', 'desc').limit(3)
+    expect(rows.map((r) => r.entity_id).sort()).toEqual([...ids].sort())
+    const batch = rows[0]!.after.batch
+    expect(rows.every((r) => r.after.batch === batch && r.after.layout === 'sheet' && r.after.labelsInBatch === 4)).toBe(true)
+    expect(rows.find((r) => r.entity_id === ids[0])!.after.copies).toBe(2)
+  })
+})
+
+describe('single labels', () => {
+  it('puts each label on its own 50 × 25 mm page, one QR code each', async () => {
+    const chosen = seeded.slice(3, 6)
+    const pdf = await labels(c.technician, chosen.map((s) => s.id), 'single')
+    const info = await pdfPages(pdf)
+    expect(info.pages).toBe(3)
+    expect(info.width).toBeCloseTo(50 * MM, 2)
+    expect(info.height).toBeCloseTo(25 * MM, 2)
+    const pages = await renderPages(pdf, 300)
+    const decoded = await Promise.all(pages.map(zbar))
+    expect(decoded).toEqual(chosen.map((s) => [`${base()}/scan/${s.code}`]))
+  })
+
+  it('prints an accented name without empty boxes', async () => {
+    const s = await createSample(c.manager, { name: 'Łódź Żółć gęślą foil' })
+    const text = await pdfText(await labels(c.technician, [s.id], 'single'))
+    expect(text).toContain('Łódź Żółć gęślą foil')
+  })
+})
+
+describe('what labels are refused', () => {
+  it('refuses retired samples with their codes, and unknown ids', async () => {
+    const s = await createSample(c.manager)
+    await c.manager.delete(`/api/samples/${s.id}?version=1`)
+    const retired = await c.technician.post('/api/labels', { sampleIds: [seeded[0]!.id, s.id], layout: 'sheet' })
+    expect(retired.status).toBe(409)
+    expect(retired.body.data.retired).toEqual([s.code])
+    expect((await c.technician.post('/api/labels', { sampleIds: [crypto.randomUUID()], layout: 'single' })).status).toBe(404)
+  })
+
+  it('checks the list: at least one, at most 300, ids only', async () => {
+    expect((await c.technician.post('/api/labels', { sampleIds: [], layout: 'sheet' })).status).toBe(400)
+    expect((await c.technician.post('/api/labels', { sampleIds: Array(301).fill(seeded[0]!.id), layout: 'sheet' })).status).toBe(400)
+    expect((await c.technician.post('/api/labels', { sampleIds: ['S-2026-000001'], layout: 'sheet' })).status).toBe(400)
+    expect((await c.technician.post('/api/labels', { sampleIds: [seeded[0]!.id], layout: 'poster' })).status).toBe(400)
+  })
+})

@@ -1,0 +1,135 @@
+import { describe, it, expect, beforeAll, afterAll } from 'vitest'
+import { readFileSync } from 'node:fs'
+import type { Browser, Page } from 'playwright-core'
+import { launch, newContext, signInAs, snap, waitForApp } from '../support/browser'
+import { signedIn, unique, type Client } from '../support/api'
+import { createSample } from '../support/samples'
+import { pdfPages, renderPages } from '../support/pdf'
+
+let browser: Browser
+let manager: Client
+let technician: Client
+let places: { id: string; path: string; name: string }[]
+beforeAll(async () => {
+  browser = await launch()
+  manager = await signedIn('manager')
+  technician = await signedIn('technician')
+  places = (await technician.get('/api/locations')).body.items
+})
+afterAll(async () => {
+  await browser?.close()
+})
+
+const noSideways = (page: Page) => page.evaluate(() => document.documentElement.scrollWidth <= window.innerWidth)
+
+describe('scanning a label on a phone', () => {
+  it('reads a photo of a label, opens the bench card and moves the sample', async () => {
+    const sample = await createSample(manager, { name: `Scanned foil ${unique()}`, locationId: places[0]!.id, massMg: 4, hazardStatements: 'H317 H351 H372' })
+    // The photo: the single label as the label printer would print it, rendered at 200 dpi.
+    const label = await technician.post('/api/labels', { sampleIds: [sample.id], layout: 'single' })
+    expect(label.status).toBe(200)
+    const [photo] = await renderPages(label.body as Buffer, 200)
+
+    const context = await newContext(browser, 'phone')
+    const page = await context.newPage()
+    await signInAs(page, 'technician')
+    await page.goto('/scan')
+    await waitForApp(page)
+    await expect(noSideways(page)).resolves.toBe(true)
+    await snap(page, 'scan-phone')
+    await Promise.all([page.waitForURL(`**/scan/${sample.code}`), page.getByTestId('scan-photo').setInputFiles(photo!)])
+    await page.getByTestId('bench-card').waitFor()
+    await expect(page.getByTestId('bench-code').innerText()).resolves.toBe(sample.code)
+    await expect(page.getByTestId('bench-place').innerText()).resolves.toBe(places[0]!.path)
+    await expect(page.locator('[data-caution=toxic]').count()).resolves.toBe(1)
+    await expect(noSideways(page)).resolves.toBe(true)
+    await snap(page, 'bench-card-phone')
+
+    const to = places[2]!
+    await page.getByTestId('action-move').click()
+    await page.getByTestId('act-place').selectOption(to.id)
+    await snap(page, 'bench-move-form-phone')
+    await page.getByTestId('act-save').click()
+    await page.getByTestId('bench-notice').getByText('Moved.').waitFor()
+    await expect(page.getByTestId('bench-place').innerText()).resolves.toBe(to.path)
+    await expect(page.getByTestId('bench-events').innerText()).resolves.toContain(to.path)
+    const after = (await technician.get(`/api/samples/${sample.id}`)).body
+    expect(after).toMatchObject({ locationId: to.id, version: 2 })
+
+    await page.getByTestId('action-check-out').click()
+    await page.getByTestId('act-holder').fill('Visiting group from Brelund')
+    await page.getByTestId('act-run').fill('Beam time 26-41')
+    await snap(page, 'bench-checkout-form-phone')
+    await page.getByTestId('act-save').click()
+    await page.getByTestId('bench-checkout').waitFor()
+    await expect(page.getByTestId('bench-checkout').innerText()).resolves.toContain('Visiting group from Brelund')
+    await page.getByTestId('action-consume').click()
+    await page.getByTestId('act-amount').fill('1,5')
+    await expect(page.getByTestId('action-form').innerText()).resolves.toContain('2.5 mg will be left.')
+    await page.getByTestId('act-save').click()
+    await page.getByTestId('bench-notice').getByText('Use recorded.').waitFor()
+    await expect(page.getByTestId('bench-mass').innerText()).resolves.toBe('2.5 mg')
+    await snap(page, 'bench-card-after-phone')
+    await context.close()
+  })
+
+  it('opens a typed code with the keyboard alone, and says when a code is not one', async () => {
+    const sample = await createSample(manager, { name: `Typed foil ${unique()}` })
+    const context = await newContext(browser, 'phone')
+    const page = await context.newPage()
+    await signInAs(page, 'technician')
+    await page.goto('/scan')
+    await waitForApp(page)
+    await page.getByTestId('scan-code').fill('X-12')
+    await page.getByTestId('scan-code').press('Enter')
+    await expect(page.getByTestId('scan-problem').innerText()).resolves.toMatch(/not a sample code/)
+    await page.getByTestId('scan-code').fill(sample.code.replace(/-0+/, '-'))
+    await Promise.all([page.waitForURL(`**/scan/${sample.code}`), page.getByTestId('scan-code').press('Enter')])
+    await page.getByTestId('bench-card').waitFor()
+    await context.close()
+  })
+
+  it('shows the scan page and the bench card at desktop width too, and read-only to a scientist', async () => {
+    const sample = await createSample(manager, { name: `Desk foil ${unique()}`, locationId: places[1]!.id })
+    const context = await newContext(browser)
+    const page = await context.newPage()
+    await signInAs(page, 'manager')
+    await page.goto('/scan')
+    await waitForApp(page)
+    await snap(page, 'scan-desktop')
+    await page.goto(`/scan/${sample.code}`)
+    await waitForApp(page)
+    await snap(page, 'bench-card-desktop')
+    await context.close()
+
+    const sci = await newContext(browser, 'phone')
+    const sp = await sci.newPage()
+    await signInAs(sp, 'scientist')
+    await sp.goto(`/scan/${sample.code}`)
+    await waitForApp(sp)
+    await sp.getByTestId('bench-card').waitFor()
+    await expect(sp.getByTestId('action-move').count()).resolves.toBe(0)
+    await sp.goto('/scan')
+    await expect(sp.getByRole('heading', { level: 1 }).innerText()).resolves.toMatch(/Not part of your role/)
+    await sci.close()
+  })
+})
+
+describe('printing labels from the lists', () => {
+  it('lets a technician tick samples and download their labels', async () => {
+    const context = await newContext(browser)
+    const page = await context.newPage()
+    await signInAs(page, 'technician')
+    await page.goto('/samples')
+    await waitForApp(page)
+    const boxes = page.getByTestId('choose-sample')
+    await boxes.nth(0).check()
+    await boxes.nth(1).check()
+    await expect(page.getByTestId('print-labels').innerText()).resolves.toBe('Print labels (2)')
+    await page.getByTestId('label-layout').selectOption('single')
+    await snap(page, 'samples-list-labels-desktop')
+    const [download] = await Promise.all([page.waitForEvent('download'), page.getByTestId('print-labels').click()])
+    expect((await pdfPages(readFileSync((await download.path())!))).pages).toBe(2)
+    await context.close()
+  })
+})
