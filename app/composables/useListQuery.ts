@@ -49,5 +49,15 @@ export function useListQuery(defaults: { sort?: string; pageSize?: number; filte
     () => (page.value = 1),
   )
 
-  return { q, searchText, sort, page, pageSize, filters, query }
+  /** The CSV export of the same filtered list: `format=csv` on the list route, without paging. */
+  function exportHref(route: string) {
+    return computed(() => {
+      const params = new URLSearchParams()
+      for (const [k, v] of Object.entries(query.value)) if (k !== 'page' && k !== 'pageSize') params.set(k, String(v))
+      params.set('format', 'csv')
+      return `${route}?${params}`
+    })
+  }
+
+  return { q, searchText, sort, page, pageSize, filters, query, exportHref }
 }

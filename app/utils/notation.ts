@@ -12,12 +12,5 @@ export function chargeSuperscript(charge: number): string {
   return charge > 0 ? `${charge}+` : `${-charge}−`
 }
 
-/** A number of eV printed to a precision that suits its size. */
-export function formatEv(eV: number | null | undefined): string {
-  if (eV === null || eV === undefined || !Number.isFinite(eV)) return '—'
-  const abs = Math.abs(eV)
-  if (abs >= 10_000) return eV.toFixed(0)
-  if (abs >= 100) return eV.toFixed(1)
-  if (abs >= 1) return eV.toFixed(3)
-  return eV.toPrecision(3)
-}
+/** A number of eV printed to a precision that suits its size (one rule for pages and certificates). */
+export { formatEv } from '#shared/certificates/format'
