@@ -55,7 +55,9 @@ describe('a sheet of labels', () => {
   })
 
   it('prints the name, main species, pictogram codes and the radiation caution', async () => {
-    const uranium = (await c.technician.get('/api/samples?element=U&pageSize=1')).body.items[0]
+    // The demo stock's depleted-uranium target (H300+H330 H373 H411): found by name, since
+    // other tests add uranium-bearing samples of their own.
+    const uranium = (await c.technician.get(`/api/samples?q=${encodeURIComponent('Depleted uranium fluoride')}&pageSize=1`)).body.items[0]
     const text = (await pdfText(await labels(c.technician, [uranium.id], 'sheet'))).replace(/\s+/g, ' ')
     expect(text).toContain(uranium.code)
     expect(text).toContain('RADIOACTIVE')
