@@ -1,13 +1,25 @@
 /**
  * Isotopic composition of a sample: from the components a lab manager records (element, isotope
- * or natural, fraction of the sample, enrichment) to the atom fraction and atomic mass of every
- * isotope, and the sample's mean atomic mass. Isotope masses and natural abundances come from the
- * species engine's nuclide data (npm chemical-elements, NIST isotopic compositions).
+ * or natural, fraction of the sample, and for an isotope either its enrichment or the supplier's
+ * full isotopic analysis) to the atom fraction and atomic mass of every isotope, and the sample's
+ * mean atomic mass. Isotope masses and natural abundances come from the species engine's nuclide
+ * data (see ISOTOPE_DATA_SOURCES for the evaluations behind them).
  */
-import { getElement, ISOTOPE_SOURCE } from '../physics/index'
+import { getElement } from '../physics/index'
+import { isotopeLabel } from './nuclide'
 import type { FractionBasis } from './vocabulary'
 
-export { ISOTOPE_SOURCE }
+export { ISOTOPE_DATA_SOURCES, ISOTOPE_SOURCE } from './isotope-sources'
+
+/** One line of a supplier's isotopic analysis: an isotope's atom fraction in %, with its standard uncertainty in %. */
+export interface AnalysisRow {
+  massNumber: number
+  percent: number
+  uncertainty?: number | null
+}
+
+/** The isotope percentages of an analysis must add up to 100 within this (percentage points): suppliers round each line. */
+export const ANALYSIS_SUM_TOLERANCE = 0.1
 
 /** Fractions must add up to 1 within this (absolute): recorded fractions are rounded, typically to 3–4 digits. */
 export const FRACTION_TOLERANCE = 0.001
@@ -19,10 +31,12 @@ export interface ComponentInput {
   /** fraction of the sample, on the basis given */
   fraction: number
   basis: FractionBasis
-  /** share of this isotope among the atoms of its element, %; blank means 100 % (isotopically pure) */
+  /** share of this isotope among the atoms of its element, %; required for a named isotope unless an analysis is given */
   enrichmentPercent?: number | null
   fractionUncertainty?: number | null
   enrichmentUncertainty?: number | null
+  /** the full isotopic analysis of this component's element, in place of an enrichment */
+  analysis?: readonly AnalysisRow[] | null
 }
 
 export interface IsotopeShare {
@@ -60,22 +74,68 @@ export function fractionSumProblem(components: readonly Pick<ComponentInput, 'fr
   return `The fractions add up to ${sum.toFixed(4)}; they must add up to 1 (within ±${FRACTION_TOLERANCE})`
 }
 
+/** The problem with an isotopic analysis, or null: known isotopes, no repeats, the named isotope listed, a sum of 100 %. */
+export function analysisProblem(z: number, massNumber: number | null, analysis: readonly AnalysisRow[]): string | null {
+  const element = getElement(z)
+  if (!element) return `No element with Z = ${z}`
+  if (massNumber === null) return 'An isotopic analysis belongs to a named isotope: choose the isotope the material is enriched in'
+  if (analysis.length < 1) return 'List every isotope of the analysis with its atom fraction'
+  const seen = new Set<number>()
+  for (const r of analysis) {
+    if (!element.isotopes.some((i) => i.massNumber === r.massNumber)) return `${r.massNumber}${element.symbol} is not a known nuclide`
+    if (seen.has(r.massNumber)) return `${isotopeLabel(z, r.massNumber)} is listed twice in the analysis`
+    seen.add(r.massNumber)
+  }
+  if (!seen.has(massNumber)) return `The analysis must list ${isotopeLabel(z, massNumber)}, the isotope named`
+  const sum = analysis.reduce((s, r) => s + r.percent, 0)
+  if (Math.abs(sum - 100) > ANALYSIS_SUM_TOLERANCE) return `The isotopes of the analysis add up to ${sum.toFixed(3)} %; they must add up to 100 % (within ±${ANALYSIS_SUM_TOLERANCE} %)`
+  return null
+}
+
+/** Whether a named isotope needs its enrichment stated: yes unless nature offers no other isotope to make up a remainder. */
+export function needsEnrichment(z: number, massNumber: number): boolean {
+  const element = getElement(z)
+  return !!element && element.naturalIsotopes.some((i) => i.massNumber !== massNumber)
+}
+
 /**
  * How the atoms of one component's element divide among its isotopes. Natural: the natural
- * abundances. An isotope at enrichment e: that isotope e, and the rest (1 − e) spread over the
- * element's other natural isotopes in their natural proportions — the usual way a supplier's
- * "enriched to e %" is read when the remainder is not itemised.
+ * abundances. An isotopic analysis: each isotope's percentage, normalised to their sum. An isotope
+ * at enrichment e: that isotope e, and the rest (1 − e) spread over the element's other natural
+ * isotopes in their natural proportions — the usual way a supplier's "enriched to e %" is read
+ * when the remainder is not itemised. A named isotope without either is an error, never 100 %,
+ * unless nature has no other isotope of the element (¹⁹⁷Au, ²⁴¹Am).
  */
-export function isotopicMakeUp(z: number, massNumber: number | null, enrichmentPercent?: number | null): { ok: true; shares: IsotopeShare[] } | { ok: false; message: string } {
+export function isotopicMakeUp(
+  z: number,
+  massNumber: number | null,
+  enrichmentPercent?: number | null,
+  analysis?: readonly AnalysisRow[] | null,
+): { ok: true; shares: IsotopeShare[] } | { ok: false; message: string } {
   const element = getElement(z)
   if (!element) return { ok: false, message: `No element with Z = ${z}` }
+  if (analysis && analysis.length) {
+    const problem = analysisProblem(z, massNumber, analysis)
+    if (problem) return { ok: false, message: problem }
+    const sum = analysis.reduce((s, r) => s + r.percent, 0)
+    return { ok: true, shares: analysis.map((r) => ({ massNumber: r.massNumber, massU: element.isotopes.find((i) => i.massNumber === r.massNumber)!.massU, share: r.percent / sum })) }
+  }
   if (massNumber === null) {
     if (!element.naturalIsotopes.length) return { ok: false, message: `${element.symbol} has no natural isotopic composition: name an isotope` }
     return { ok: true, shares: element.naturalIsotopes.map((i) => ({ massNumber: i.massNumber, massU: i.massU, share: i.abundance! })) }
   }
   const isotope = element.isotopes.find((i) => i.massNumber === massNumber)
   if (!isotope) return { ok: false, message: `${massNumber}${element.symbol} is not a known nuclide` }
-  const e = (enrichmentPercent ?? 100) / 100
+  if ((enrichmentPercent === null || enrichmentPercent === undefined) && needsEnrichment(z, massNumber)) {
+    return { ok: false, message: `Give the enrichment of ${isotopeLabel(z, massNumber)} in % (as on the supplier's certificate), or its full isotopic analysis` }
+  }
+  return enrichedShares(z, massNumber, (enrichmentPercent ?? 100) / 100)
+}
+
+/** The make-up at enrichment `e` (a fraction, not %): used by the propagation, which varies e. */
+export function enrichedShares(z: number, massNumber: number, e: number): { ok: true; shares: IsotopeShare[] } | { ok: false; message: string } {
+  const element = getElement(z)!
+  const isotope = element.isotopes.find((i) => i.massNumber === massNumber)!
   const shares: IsotopeShare[] = [{ massNumber, massU: isotope.massU, share: e }]
   const rest = 1 - e
   if (rest > 1e-12) {
@@ -106,12 +166,20 @@ export function expandComposition(components: readonly ComponentInput[]): Expand
   if (bases.size > 1) return { ok: false, message: 'Give every fraction on the same basis: all atom fractions or all mass fractions' }
   const makeUps: IsotopeShare[][] = []
   for (const c of components) {
-    const m = isotopicMakeUp(c.z, c.massNumber, c.enrichmentPercent)
+    const m = isotopicMakeUp(c.z, c.massNumber, c.enrichmentPercent, c.analysis)
     if (!m.ok) return m
     makeUps.push(m.shares)
   }
+  return combine(components, components.map((c) => c.fraction), makeUps)
+}
+
+/**
+ * The sample's isotopes from each component's fraction and isotopic make-up: the second half of
+ * expandComposition, apart so the uncertainty propagation can run it on varied inputs.
+ */
+export function combine(components: readonly Pick<ComponentInput, 'z' | 'basis'>[], fractions: readonly number[], makeUps: readonly (readonly IsotopeShare[])[]): Expanded {
   const componentMassU = makeUps.map(meanMass)
-  const weights = components.map((c, i) => (c.basis === 'mass' ? c.fraction / componentMassU[i]! : c.fraction))
+  const weights = components.map((c, i) => (c.basis === 'mass' ? fractions[i]! / componentMassU[i]! : fractions[i]!))
   const total = weights.reduce((s, w) => s + w, 0)
   if (!(total > 0)) return { ok: false, message: 'The fractions must be positive' }
   const componentAtomFraction = weights.map((w) => w / total)

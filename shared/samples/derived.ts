@@ -10,9 +10,12 @@
  * holding the atom fraction x_i of them has N_i = ρ_A · N_A · x_i / M̄.
  */
 import { expandComposition, type ComponentInput, type ExpandedIsotope } from './composition'
+import { compositionModel } from './composition-model'
+import { AVOGADRO_CONSTANT } from './constants'
+import { propagateGum } from './propagation'
 
 /** Avogadro constant, 1/mol: exact since the 2019 SI redefinition (BIPM SI Brochure, 9th edition). */
-export const AVOGADRO = 6.02214076e23
+export const AVOGADRO = AVOGADRO_CONSTANT
 
 /** µg/cm² per (g/cm³ · nm). */
 export const AREAL_PER_DENSITY_NM = 0.1
@@ -21,11 +24,13 @@ export const FORMULAS = {
   meanAtomicMass: 'M̄ = Σᵢ xᵢ · mᵢ   (xᵢ atom fraction, mᵢ atomic mass of isotope i)',
   massToAtomFraction: 'x_c = (w_c / M_c) / Σⱼ (w_j / M_j)   (mass fraction w, mean atomic mass M of each component)',
   enrichment: 'isotope share = e; the other natural isotopes share 1 − e in their natural proportions',
+  analysis: 'isotopic analysis: xᵢ = yᵢ / Σₖ yₖ   (the supplier\'s atom percentages yₖ, normalised: Σ x = 1)',
   arealDensity: 'ρ_A [µg/cm²] = ρ [g/cm³] · t [nm] · 0.1   (1 nm = 10⁻⁷ cm, 1 g = 10⁶ µg)',
   thickness: 't [nm] = ρ_A [µg/cm²] / (0.1 · ρ [g/cm³])',
   bulkDensity: 'ρ [g/cm³] = ρ_A [µg/cm²] / (0.1 · t [nm])',
   atomsPerArea: 'Nᵢ [atoms/cm²] = ρ_A [g/cm²] · N_A · xᵢ / M̄   (N_A = 6.02214076 × 10²³ /mol)',
-  atomsUncertainty: 'δNᵢ / Nᵢ = √((δρ_A / ρ_A)² + (δf / f)² + (δe / e)²)   (independent, first order)',
+  atomsUncertainty:
+    'u²(y) = Σⱼ (∂y/∂xⱼ)² u²(xⱼ) over every recorded input xⱼ (fractions, enrichments, analysis lines, ρ_A): GUM first-order propagation, JCGM 100:2008 §5.1.2, through the closure Σ x = 1 (its covariance carried); checked by Monte Carlo, JCGM 101:2008',
 } as const
 
 /** Areal density, µg/cm², of a layer `thicknessNm` thick at bulk density `densityGcm3`. */
@@ -57,21 +62,19 @@ export interface DerivedInput {
 }
 
 export interface DerivedIsotope extends ExpandedIsotope {
+  /** standard uncertainty of the atom fraction, null when no input carries one */
+  atomFractionUncertainty: number | null
   atomsPerCm2: number | null
   atomsPerCm2Uncertainty: number | null
 }
 
 export interface Derived {
-  composition: { ok: true; meanAtomicMassU: number; isotopes: DerivedIsotope[] } | { ok: false; message: string } | null
+  composition: { ok: true; meanAtomicMassU: number; meanAtomicMassUncertainty: number | null; isotopes: DerivedIsotope[] } | { ok: false; message: string } | null
   /** the areal density to compute with: as recorded, or from thickness and bulk density */
   arealDensity: { value: number; uncertainty: number | null; derived: boolean } | null
   thickness: { value: number; uncertainty: number | null; derived: boolean } | null
   /** bulk density implied by a recorded areal density and thickness together */
   impliedBulkDensity: number | null
-}
-
-function rel(u: number | null | undefined, v: number | null | undefined): number {
-  return u && v ? u / v : 0
 }
 
 /** Everything the sample page shows beyond what was recorded. */
@@ -93,16 +96,18 @@ export function deriveSample(s: DerivedInput): Derived {
     const e = expandComposition(s.components)
     if (!e.ok) composition = e
     else {
+      const model = compositionModel(s.components, areal)
+      const p = model && model.inputs.length ? propagateGum(model.evaluate, model.inputs) : null
+      const n = e.isotopes.length
+      // Below 10⁻⁹ of the value is the noise of the numerical derivatives: no uncertainty.
+      const u = (k: number) => (p && p.uncertainties[k]! > 1e-9 * Math.abs(p.values[k]!) ? p.uncertainties[k]! : null)
       composition = {
         ok: true,
         meanAtomicMassU: e.meanAtomicMassU,
-        isotopes: e.isotopes.map((i) => {
-          const c = s.components[i.component]!
-          const n = areal ? atomsPerCm2(areal.value, e.meanAtomicMassU, i.atomFraction) : null
-          // The enrichment uncertainty bears on the enriched isotope only, the one named by the component.
-          const named = c.massNumber === i.massNumber
-          const r = Math.hypot(rel(areal?.uncertainty, areal?.value), rel(c.fractionUncertainty, c.fraction), named ? rel(c.enrichmentUncertainty, c.enrichmentPercent ?? 100) : 0)
-          return { ...i, atomsPerCm2: n, atomsPerCm2Uncertainty: n !== null && r > 0 ? n * r : null }
+        meanAtomicMassUncertainty: u(n),
+        isotopes: e.isotopes.map((i, k) => {
+          const atoms = areal ? atomsPerCm2(areal.value, e.meanAtomicMassU, i.atomFraction) : null
+          return { ...i, atomFractionUncertainty: u(k), atomsPerCm2: atoms, atomsPerCm2Uncertainty: atoms !== null ? u(n + 1 + k) : null }
         }),
       }
     }
