@@ -44,6 +44,9 @@ const byName = (name: string) => stock.find((s) => s.name === name)!
 /** A one-page certificate: a single-isotope foil without hazards (a new document each call: pdfmake consumes it). */
 export const onePageCertificate = () => certificate(samplePayload(byName('13C enriched foil'), [{ fileName: 'TC-13-0044 CoA.pdf', sha256: 'c'.repeat(64) }], ctx(1)) as CertificatePayload)
 
+/** A certificate of a foil with the supplier's full isotopic analysis. */
+export const analysedCertificate = () => certificate(samplePayload(byName('58Ni self-supporting foil'), [{ fileName: 'QI-58N-1102 CoA.pdf', sha256: 'e'.repeat(64) }], ctx(3)) as CertificatePayload)
+
 /** A long certificate: a radioactive, toxic compound target with supplier documents. */
 export const hazardousCertificate = () => certificate(samplePayload(stock.find((s) => s.radioactive)!, [{ fileName: 'certificate.pdf', sha256: 'd'.repeat(64) }], ctx(2)) as CertificatePayload)
 

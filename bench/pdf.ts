@@ -16,7 +16,7 @@ import path from 'node:path'
 import { fileURLToPath } from 'node:url'
 import { renderPdf, type FontMode } from '../server/pdf/fonts'
 import { preparePackageFonts } from '../server/pdf/package-fonts'
-import { hazardousCertificate, labels, onePageCertificate, speciesCertificate, trivial } from './pdf-fixtures'
+import { analysedCertificate, hazardousCertificate, labels, onePageCertificate, speciesCertificate, trivial } from './pdf-fixtures'
 
 const TARGET = { certificate: 150, sheet: 2000 }
 const median = (xs: number[]) => {
@@ -91,6 +91,7 @@ if (out) {
   const docs: [string, () => Record<string, unknown>][] = [
     ['certificate-one-page.pdf', onePageCertificate],
     ['certificate-hazardous.pdf', hazardousCertificate],
+    ['certificate-analysed.pdf', analysedCertificate],
     ['certificate-species.pdf', speciesCertificate],
     ['labels-sheet-100.pdf', () => labels(100, 'sheet')],
     ['labels-single-6.pdf', () => labels(6, 'single')],

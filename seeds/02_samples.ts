@@ -4,7 +4,9 @@ import type { Knex } from 'knex'
 import { SampleBody } from '../shared/schemas/samples'
 import { parseComposition } from '../shared/samples/csv'
 import { DATASHEET_KINDS, contentDisposition, kindFromName } from '../shared/samples/filetypes'
-import { componentRows, sampleColumns } from '../server/utils/sample-columns'
+import { insertComponents, sampleColumns } from '../server/utils/sample-columns'
+import { isotopicMakeUp, type AnalysisRow } from '../shared/samples/composition'
+import { getElement } from '../shared/physics/index'
 import { DEMO_PEOPLE } from './01_people'
 import { PLACES, SAMPLES, type SeedDoc, type SeedSample } from './lib/stock'
 import { simpleCsv, simplePdf } from './lib/documents'
@@ -30,10 +32,32 @@ function objectStore(): { client: Client; bucket: string; region: string } {
 
 const day = (offset: number) => new Date(Date.now() + offset * 86_400_000).toISOString().slice(0, 10)
 
+// The lines of a demo isotopic analysis: as recorded when the component has one, otherwise the
+// enrichment with the rest in natural proportions, rounded as a supplier would print them.
+function analysisLines(p: Record<string, unknown>): { symbol: string; massNumber: number; percent: string; uncertainty: string }[] {
+  const z = Number(p.z)
+  if (p.massNumber === null) return []
+  const massNumber = Number(p.massNumber)
+  const symbol = getElement(z)!.symbol
+  const recorded = (p.analysis ?? null) as Record<string, string | null>[] | null
+  let rows: AnalysisRow[]
+  if (recorded) rows = recorded.map((r) => ({ massNumber: Number(r.massNumber), percent: Number(r.percent), uncertainty: r.uncertainty === null ? null : Number(r.uncertainty) }))
+  else {
+    const e = Number(p.enrichmentPercent)
+    const ue = p.enrichmentUncertainty === null ? 0.1 : Number(p.enrichmentUncertainty)
+    const makeUp = isotopicMakeUp(z, massNumber, e)
+    if (!makeUp.ok) return []
+    // The other isotopes carry the enrichment's uncertainty in proportion to their share of the rest.
+    rows = makeUp.shares.map((sh) => ({ massNumber: sh.massNumber, percent: sh.share * 100, uncertainty: sh.massNumber === massNumber ? ue : Math.max(0.001, (ue * sh.share * 100) / Math.max(1e-9, 100 - e)) }))
+  }
+  return rows.map((r) => ({ symbol, massNumber: r.massNumber, percent: r.percent.toFixed(3), uncertainty: (r.uncertainty ?? 0).toFixed(3) }))
+}
+
 function document(doc: SeedDoc, s: SeedSample, code: string): Buffer {
   if (doc.kind === 'isotopic') {
-    const parts = parseComposition(s.composition, 'atom').components
-    return simpleCsv(['lot', 'isotope', 'enrichment_percent', 'uncertainty_percent', 'method'], parts.map((p) => [s.lot ?? '', `${p.massNumber ?? 'nat'}`, String(p.enrichmentPercent ?? ''), String(p.enrichmentUncertainty ?? '0.1'), 'TIMS']))
+    // The supplier's full analysis: one line per isotope of each enriched component, atom % and uncertainty.
+    const lines = parseComposition(s.composition, 'atom').components.flatMap((p) => analysisLines(p))
+    return simpleCsv(['lot', 'isotope', 'atom_percent', 'uncertainty_percent', 'method'], lines.map((l) => [s.lot ?? '', `${l.symbol}-${l.massNumber}`, l.percent, l.uncertainty, 'TIMS']))
   }
   if (doc.kind === 'note') {
     return Buffer.from(`${s.name} (${code})\n\n${s.notes ?? ''}\nStore in ${s.place}. Report any damage to the radiation-protection officer at once.\n`, 'utf8')
@@ -80,7 +104,7 @@ export async function seed(knex: Knex): Promise<void> {
           components: parseComposition(composition, basis ?? 'atom').components,
         })
         const [row] = await trx('samples').insert({ ...sampleColumns(data), created_by: manager?.id ?? null, updated_by: manager?.id ?? null }).returning(['id', 'code'])
-        if (data.components.length) await trx('sample_components').insert(componentRows(row!.id, data))
+        await insertComponents(trx, row!.id, data)
         await trx('audit_log').insert({ ...actor, action: 'sample.seeded', entity_type: 'sample', entity_id: row!.id, after: JSON.stringify({ code: row!.code, ...data }) })
         for (const doc of s.docs ?? []) {
           const bytes = document(doc, s, row!.code)

@@ -11,6 +11,17 @@ export interface ComponentRow {
   enrichmentPercent: string
   fractionUncertainty: string
   enrichmentUncertainty: string
+  /** how the isotope's make-up is given: an enrichment, or the supplier's full isotopic analysis */
+  isotopics: 'enrichment' | 'analysis'
+  analysis: AnalysisLine[]
+}
+
+/** One line of an isotopic analysis as typed: mass number, atom %, ± %. */
+export interface AnalysisLine {
+  key: number
+  massNumber: string
+  percent: string
+  uncertainty: string
 }
 
 export interface SampleFormState {
@@ -44,12 +55,26 @@ const text = (v: unknown) => (v === null || v === undefined ? '' : String(v))
 
 /** An empty composition row. */
 export function blankComponent(): ComponentRow {
-  return { key: nextKey++, z: '', massNumber: '', fraction: '', enrichmentPercent: '', fractionUncertainty: '', enrichmentUncertainty: '' }
+  return { key: nextKey++, z: '', massNumber: '', fraction: '', enrichmentPercent: '', fractionUncertainty: '', enrichmentUncertainty: '', isotopics: 'enrichment', analysis: [] }
+}
+
+/** An analysis line, blank or filled. */
+export function analysisLine(massNumber = '', percent = '', uncertainty = ''): AnalysisLine {
+  return { key: nextKey++, massNumber, percent, uncertainty }
 }
 
 interface StoredSample {
   [k: string]: unknown
-  components: { z: number; massNumber: number | null; fraction: number; basis: string; enrichmentPercent: number | null; fractionUncertainty: number | null; enrichmentUncertainty: number | null }[]
+  components: {
+    z: number
+    massNumber: number | null
+    fraction: number
+    basis: string
+    enrichmentPercent: number | null
+    fractionUncertainty: number | null
+    enrichmentUncertainty: number | null
+    analysis?: { massNumber: number; percent: number; uncertainty: number | null }[] | null
+  }[]
   hazardStatements: string[]
   radioactive: boolean
 }
@@ -64,7 +89,17 @@ export function formState(s?: StoredSample | null): SampleFormState {
     hazardStatements: (s?.hazardStatements ?? []).join(' '), radioactive: s?.radioactive ?? false, nuclide: f('nuclide'), activityBq: f('activityBq'), notes: f('notes'),
     basis: s?.components[0]?.basis === 'mass' ? 'mass' : 'atom',
     components: s?.components.length
-      ? s.components.map((c) => ({ key: nextKey++, z: text(c.z), massNumber: text(c.massNumber), fraction: text(c.fraction), enrichmentPercent: text(c.enrichmentPercent), fractionUncertainty: text(c.fractionUncertainty), enrichmentUncertainty: text(c.enrichmentUncertainty) }))
+      ? s.components.map((c) => ({
+          key: nextKey++,
+          z: text(c.z),
+          massNumber: text(c.massNumber),
+          fraction: text(c.fraction),
+          enrichmentPercent: text(c.enrichmentPercent),
+          fractionUncertainty: text(c.fractionUncertainty),
+          enrichmentUncertainty: text(c.enrichmentUncertainty),
+          isotopics: c.analysis?.length ? ('analysis' as const) : ('enrichment' as const),
+          analysis: (c.analysis ?? []).map((r) => analysisLine(text(r.massNumber), text(r.percent), text(r.uncertainty))),
+        }))
       : [blankComponent()],
   }
 }
@@ -74,7 +109,21 @@ export function formInput(s: SampleFormState): SampleInput {
   const { basis, components, ...fields } = s
   const rows = components.filter((c) => c.z || c.fraction || c.massNumber)
   // form and status are checked by the schema, which names the values it accepts
-  return { ...fields, components: rows.map(({ key: _key, ...c }) => ({ ...c, massNumber: c.massNumber || null, basis })) } as SampleInput
+  return {
+    ...fields,
+    components: rows.map(({ key: _key, isotopics, analysis, ...c }) =>
+      isotopics === 'analysis' && c.massNumber
+        ? {
+            ...c,
+            enrichmentPercent: '',
+            enrichmentUncertainty: '',
+            massNumber: c.massNumber,
+            basis,
+            analysis: analysis.filter((l) => l.massNumber || l.percent || l.uncertainty).map(({ key: _k, ...l }) => l),
+          }
+        : { ...c, massNumber: c.massNumber || null, basis, analysis: null },
+    ),
+  } as SampleInput
 }
 
 /** Field errors by path ("components.0.fraction"), first message each. */

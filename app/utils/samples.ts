@@ -1,3 +1,4 @@
+import { formatMeasured } from '#shared/format/measured'
 import { isotopeLabel } from '#shared/samples/nuclide'
 
 /** A number with up to `digits` significant digits, trailing zeros dropped (1200, 0.0125). */
@@ -15,10 +16,9 @@ export function formatScientific(v: number, digits = 4): string {
   return `${Number(mantissa)} × 10${String(Number(exponent)).replace(/./g, (c) => SUP[c] ?? c)}`
 }
 
-/** A value with its uncertainty, if any: "500 ± 15". */
+/** A value with its uncertainty, if any, rounded to it: "6450 ± 190" (shared/format/measured.ts, JCGM 100:2008 §7.2.6). */
 export function withUncertainty(v: number | null | undefined, u: number | null | undefined, digits = 4): string {
-  if (v === null || v === undefined) return '—'
-  return u ? `${formatNumber(v, digits)} ± ${formatNumber(u, 2)}` : formatNumber(v, digits)
+  return formatMeasured(v, u, '', digits)
 }
 
 /** File sizes in the units people read: 812 B, 14.2 kB, 3.1 MB. */

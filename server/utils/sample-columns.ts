@@ -1,5 +1,6 @@
 // How a validated sample maps onto its rows. Relative imports and no Nitro auto-imports, so the
 // seeds and the bench write rows exactly as the routes do.
+import type { Knex } from 'knex'
 import type { SampleData } from '../../shared/schemas/samples'
 import { hazardKinds } from '../../shared/samples/hazards'
 import type { SampleForm } from '../../shared/samples/vocabulary'
@@ -45,4 +46,30 @@ export function componentRows(sampleId: string, s: SampleData) {
     fraction_unc: c.fractionUncertainty,
     enrichment_unc_pct: c.enrichmentUncertainty,
   }))
+}
+
+/** The sample_component_isotopes rows of one component's analysis, for the component row `componentId`. */
+export function analysisRows(componentId: number, analysis: SampleData['components'][number]['analysis']) {
+  return (analysis ?? []).map((r, position) => ({ component_id: componentId, position, mass_number: r.massNumber, atom_pct: r.percent, atom_unc_pct: r.uncertainty }))
+}
+
+/** Writes a validated sample's components and their analyses (the old ones already deleted). */
+export async function insertComponents(trx: Knex.Transaction, sampleId: string, s: SampleData): Promise<void> {
+  if (!s.components.length) return
+  const ids = await trx('sample_components').insert(componentRows(sampleId, s)).returning('id')
+  const isotopes = s.components.flatMap((c, i) => analysisRows(Number(ids[i]!.id), c.analysis))
+  if (isotopes.length) await trx('sample_component_isotopes').insert(isotopes)
+}
+
+/** The analysis lines of each component id, in order, as the API answers them. */
+export async function analysesOf(db: Knex | Knex.Transaction, componentIds: number[]): Promise<Map<number, { massNumber: number; percent: number; uncertainty: number | null }[]>> {
+  const out = new Map<number, { massNumber: number; percent: number; uncertainty: number | null }[]>()
+  if (!componentIds.length) return out
+  const rows = await db('sample_component_isotopes').whereIn('component_id', componentIds).orderBy(['component_id', 'position'])
+  for (const r of rows) {
+    const id = Number(r.component_id)
+    if (!out.has(id)) out.set(id, [])
+    out.get(id)!.push({ massNumber: r.mass_number, percent: r.atom_pct, uncertainty: r.atom_unc_pct })
+  }
+  return out
 }

@@ -2,7 +2,7 @@ import type { Knex } from 'knex'
 import type { H3Event } from 'h3'
 import type { SampleComponentRow, SampleRow } from '#shared/types/db'
 import type { SampleData } from '#shared/schemas/samples'
-import { componentRows, sampleColumns } from './sample-columns'
+import { analysesOf, insertComponents } from './sample-columns'
 
 export type SampleRecord = ReturnType<typeof sampleRecord>
 
@@ -27,7 +27,9 @@ export async function placesById(db: Knex | Knex.Transaction): Promise<Map<strin
   return new Map(rows.map((r) => [r.id, { id: r.id, parentId: r.parent_id, code: r.code, name: r.name, kind: r.kind, path: pathOf(r.id) }]))
 }
 
-function componentOut(c: SampleComponentRow) {
+type AnalysisOut = { massNumber: number; percent: number; uncertainty: number | null }[]
+
+function componentOut(c: SampleComponentRow, analyses: Map<number, AnalysisOut>) {
   return {
     z: c.z,
     massNumber: c.mass_number,
@@ -36,11 +38,12 @@ function componentOut(c: SampleComponentRow) {
     enrichmentPercent: c.enrichment_pct,
     fractionUncertainty: c.fraction_unc,
     enrichmentUncertainty: c.enrichment_unc_pct,
+    analysis: analyses.get(Number(c.id)) ?? null,
   }
 }
 
 /** A sample as the API answers it (and as the audit trail records it). */
-export function sampleRecord(row: SampleRow, components: SampleComponentRow[], place: PlaceRef | null) {
+export function sampleRecord(row: SampleRow, components: SampleComponentRow[], place: PlaceRef | null, analyses: Map<number, AnalysisOut> = new Map()) {
   return {
     id: row.id,
     code: row.code,
@@ -67,7 +70,7 @@ export function sampleRecord(row: SampleRow, components: SampleComponentRow[], p
     nuclide: row.nuclide,
     activityBq: row.activity_bq,
     notes: row.notes,
-    components: [...components].sort((a, b) => a.position - b.position).map(componentOut),
+    components: [...components].sort((a, b) => a.position - b.position).map((c) => componentOut(c, analyses)),
     version: row.version,
     createdAt: row.created_at,
     updatedAt: row.updated_at,
@@ -87,8 +90,9 @@ export async function findSample(db: Knex | Knex.Transaction, id: string, opts: 
   const row = await (opts.lock ? q.forUpdate() : q)
   if (!row) return null
   const components = await db('sample_components').where({ sample_id: id })
+  const analyses = await analysesOf(db, components.map((c) => Number(c.id)))
   const places = opts.places ?? (await placesById(db))
-  return sampleRecord(row, components, row.location_id ? (places.get(row.location_id) ?? null) : null)
+  return sampleRecord(row, components, row.location_id ? (places.get(row.location_id) ?? null) : null, analyses)
 }
 
 /** Like findSample, but a missing sample is a 404. */
@@ -101,8 +105,7 @@ export async function requireSample(db: Knex | Knex.Transaction, id: string, opt
 /** Replaces a sample's components with `s.components`, in order. */
 export async function writeComponents(trx: Knex.Transaction, sampleId: string, s: SampleData): Promise<void> {
   await trx('sample_components').where({ sample_id: sampleId }).delete()
-  if (!s.components.length) return
-  await trx('sample_components').insert(componentRows(sampleId, s))
+  await insertComponents(trx, sampleId, s)
 }
 
 /** A 400 in the shape readValid gives, for a rule checked against the database. */

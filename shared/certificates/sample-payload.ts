@@ -6,7 +6,7 @@ import { classifyHazards, type HazardInput } from '../samples/hazards'
 import { GHS_SOURCE, hazardStatementText } from '../samples/ghs'
 import { deriveSample, FORMULAS } from '../samples/derived'
 import { isotopeLabel } from '../samples/nuclide'
-import { ISOTOPE_SOURCE } from '../samples/composition'
+import { ISOTOPE_DATA_SOURCES } from '../samples/composition'
 import { FORM_LABELS, type SampleForm } from '../samples/vocabulary'
 import { getElement } from '../physics/elements'
 import { formatDay } from './format'
@@ -35,7 +35,16 @@ export interface CertSampleInput {
   radioactive: boolean
   nuclide: string | null
   activityBq: number | null
-  components: { z: number; massNumber: number | null; fraction: number; basis: 'atom' | 'mass'; enrichmentPercent: number | null; fractionUncertainty: number | null; enrichmentUncertainty: number | null }[]
+  components: {
+    z: number
+    massNumber: number | null
+    fraction: number
+    basis: 'atom' | 'mass'
+    enrichmentPercent: number | null
+    fractionUncertainty: number | null
+    enrichmentUncertainty: number | null
+    analysis?: { massNumber: number; percent: number; uncertainty: number | null }[] | null
+  }[]
 }
 
 export interface Quantity {
@@ -58,8 +67,11 @@ const HANDLING: Record<SampleForm, string> = {
   other: 'Keep in its closed, labelled container as the supplier instructs.',
 }
 
+// Radiation protection is named only where the sample is radioactive.
 const DEFERRAL =
-  "These statements do not replace the supplier's safety data sheet. Store, handle, move and dispose of this sample only as the institution's radiation-protection and safety officers direct and as local regulations require."
+  "These statements do not replace the supplier's safety data sheet. Store, handle, move and dispose of this sample only as the institution's safety officers direct and as local regulations require."
+const DEFERRAL_RADIOACTIVE =
+  "These statements do not replace the supplier's safety data sheet. This sample is radioactive: store, handle, move and dispose of it only as the institution's radiation protection officer and safety officers direct, within the laboratory's licence and as local regulations require."
 
 function quantity(value: number | null, uncertainty: number | null, unit: string, derived = false): Quantity | null {
   return value === null || value === undefined ? null : { value, uncertainty: uncertainty ?? null, unit, derived }
@@ -97,24 +109,38 @@ export function samplePayload(s: CertSampleInput, datasheets: { fileName: string
         fractionUncertainty: c.fractionUncertainty,
         enrichmentPercent: c.enrichmentPercent,
         enrichmentUncertainty: c.enrichmentUncertainty,
+        analysis: c.analysis?.length ? c.analysis.map((r) => ({ label: isotopeLabel(c.z, r.massNumber), percent: r.percent, uncertainty: r.uncertainty })) : null,
       })),
       arealDensity: derived.arealDensity ? quantity(derived.arealDensity.value, derived.arealDensity.uncertainty, 'µg/cm²', derived.arealDensity.derived) : null,
       thickness: derived.thickness ? quantity(derived.thickness.value, derived.thickness.uncertainty, 'nm', derived.thickness.derived) : null,
       bulkDensity: quantity(s.bulkDensity, null, 'g/cm³'),
       mass: quantity(s.massMg, null, 'mg'),
-      meanAtomicMass: composition ? quantity(composition.meanAtomicMassU, null, 'u', true) : null,
+      meanAtomicMass: composition ? quantity(composition.meanAtomicMassU, composition.meanAtomicMassUncertainty, 'u', true) : null,
       isotopes: composition
-        ? composition.isotopes.map((i) => ({ label: isotopeLabel(i.z, i.massNumber), atomFraction: i.atomFraction, atomsPerCm2: i.atomsPerCm2, atomsPerCm2Uncertainty: i.atomsPerCm2Uncertainty }))
+        ? composition.isotopes.map((i) => ({
+            label: isotopeLabel(i.z, i.massNumber),
+            atomFraction: i.atomFraction,
+            atomFractionUncertainty: i.atomFractionUncertainty,
+            atomsPerCm2: i.atomsPerCm2,
+            atomsPerCm2Uncertainty: i.atomsPerCm2Uncertainty,
+          }))
         : [],
       radioactivity: s.radioactive ? { nuclide: s.nuclide, activityBq: s.activityBq } : null,
       uncertaintyNote:
-        "Uncertainties are as recorded: standard uncertainties unless the supplier's documentation states another coverage. Derived uncertainties combine the relative uncertainties in quadrature, to first order.",
+        "Uncertainties are standard uncertainties (k = 1) unless the supplier's documentation states another coverage; each value is rounded to its uncertainty, given to two significant digits (JCGM 100:2008, 7.2.6). Derived uncertainties: GUM first-order propagation (JCGM 100:2008, 5.1.2) of every recorded uncertainty through the model, including the closure of the isotope fractions (they sum to 1, so an enrichment's uncertainty reaches the other isotopes fully correlated, and an analysis is normalised with its covariance); checked against a Monte Carlo propagation (JCGM 101:2008). Isotope masses and natural abundances are taken as exact.",
     },
     method: {
       statement:
         "Values recorded by the laboratory from the supplier's certificate of analysis for the lot named and from its own measurements, where made. Derived quantities are computed from the recorded values:",
-      formulas: [FORMULAS.arealDensity, FORMULAS.meanAtomicMass, FORMULAS.atomsPerArea, FORMULAS.atomsUncertainty],
-      dataSource: `Isotope masses and natural abundances: ${ISOTOPE_SOURCE}.`,
+      formulas: [
+        FORMULAS.arealDensity,
+        FORMULAS.meanAtomicMass,
+        ...(s.components.some((c) => c.enrichmentPercent !== null) ? [FORMULAS.enrichment] : []),
+        ...(s.components.some((c) => c.analysis?.length) ? [FORMULAS.analysis] : []),
+        FORMULAS.atomsPerArea,
+        FORMULAS.atomsUncertainty,
+      ],
+      dataSources: [ISOTOPE_DATA_SOURCES.masses, ISOTOPE_DATA_SOURCES.abundances, ISOTOPE_DATA_SOURCES.carrier],
     },
     traceability: datasheets.length
       ? 'The recorded values are traceable as stated in the supplier documents the laboratory keeps on file for this sample (listed with their SHA-256). Derived quantities add no traceability of their own.'
@@ -132,7 +158,7 @@ export function samplePayload(s: CertSampleInput, datasheets: { fileName: string
       statements: s.hazardStatements.map((code) => ({ code, text: hazardStatementText(code) ?? '' })),
       statementSource: GHS_SOURCE,
       cautions: classifyHazards(hazardInput).map((c) => ({ kind: c.kind, title: c.title, reasons: c.reasons, advice: c.advice })),
-      deferral: DEFERRAL,
+      deferral: s.radioactive ? DEFERRAL_RADIOACTIVE : DEFERRAL,
     },
     estimates: null,
   }

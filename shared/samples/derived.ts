@@ -21,16 +21,16 @@ export const AVOGADRO = AVOGADRO_CONSTANT
 export const AREAL_PER_DENSITY_NM = 0.1
 
 export const FORMULAS = {
-  meanAtomicMass: 'M̄ = Σᵢ xᵢ · mᵢ   (xᵢ atom fraction, mᵢ atomic mass of isotope i)',
+  meanAtomicMass: 'M = Σᵢ xᵢ · mᵢ   (M mean atomic mass; xᵢ atom fraction, mᵢ atomic mass of isotope i)',
   massToAtomFraction: 'x_c = (w_c / M_c) / Σⱼ (w_j / M_j)   (mass fraction w, mean atomic mass M of each component)',
   enrichment: 'isotope share = e; the other natural isotopes share 1 − e in their natural proportions',
-  analysis: 'isotopic analysis: xᵢ = yᵢ / Σₖ yₖ   (the supplier\'s atom percentages yₖ, normalised: Σ x = 1)',
+  analysis: 'isotopic analysis: xᵢ = yᵢ / Σⱼ yⱼ   (the supplier\'s atom percentages y, normalised: Σᵢ xᵢ = 1)',
   arealDensity: 'ρ_A [µg/cm²] = ρ [g/cm³] · t [nm] · 0.1   (1 nm = 10⁻⁷ cm, 1 g = 10⁶ µg)',
   thickness: 't [nm] = ρ_A [µg/cm²] / (0.1 · ρ [g/cm³])',
   bulkDensity: 'ρ [g/cm³] = ρ_A [µg/cm²] / (0.1 · t [nm])',
-  atomsPerArea: 'Nᵢ [atoms/cm²] = ρ_A [g/cm²] · N_A · xᵢ / M̄   (N_A = 6.02214076 × 10²³ /mol)',
+  atomsPerArea: 'Nᵢ [atoms/cm²] = ρ_A [g/cm²] · N_A · xᵢ / M   (N_A = 6.02214076 × 10²³ /mol)',
   atomsUncertainty:
-    'u²(y) = Σⱼ (∂y/∂xⱼ)² u²(xⱼ) over every recorded input xⱼ (fractions, enrichments, analysis lines, ρ_A): GUM first-order propagation, JCGM 100:2008 §5.1.2, through the closure Σ x = 1 (its covariance carried); checked by Monte Carlo, JCGM 101:2008',
+    'u²(y) = Σⱼ cⱼ² u²(xⱼ) over every recorded input xⱼ (fractions, enrichments, analysis lines, ρ_A), cⱼ the sensitivity coefficient of xⱼ: GUM first-order propagation, JCGM 100:2008 §5.1.2, through the closure Σᵢ xᵢ = 1 (its covariance carried); checked by Monte Carlo, JCGM 101:2008',
 } as const
 
 /** Areal density, µg/cm², of a layer `thicknessNm` thick at bulk density `densityGcm3`. */

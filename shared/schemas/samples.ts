@@ -8,7 +8,7 @@ import { EDITABLE_STATUSES, FRACTION_BASES, LOCATION_KINDS, SAMPLE_FORMS, SAMPLE
 import { HAZARD_KINDS } from '../samples/hazards'
 import { canonicalHCode, parseHazardStatements } from '../samples/ghs'
 import { parseNuclide, formatNuclide } from '../samples/nuclide'
-import { fractionSumProblem, isotopicMakeUp } from '../samples/composition'
+import { analysisProblem, fractionSumProblem, isotopicMakeUp, needsEnrichment } from '../samples/composition'
 import { formulaProblem } from '../samples/formula'
 import { getElement } from '../physics/index'
 
@@ -31,6 +31,14 @@ const text = (max: number) => z.preprocess((v) => (typeof v === 'string' ? v.tri
 
 const isoDate = z.preprocess(blankToNull, z.iso.date({ error: 'Enter a date as YYYY-MM-DD' }).nullable())
 
+/** One line of a supplier's isotopic analysis: mass number, atom %, standard uncertainty in %. */
+export const AnalysisRowSchema = z.strictObject({
+  massNumber: z.preprocess(toNumber, z.number({ error: 'Give the mass number' }).int('A mass number is a whole number').min(1, 'Give the mass number').max(300, 'Give the mass number')),
+  percent: z.preprocess(toNumber, z.number({ error: 'Enter the atom fraction in %' }).min(0, 'An atom fraction is not negative').max(100, 'An atom fraction is at most 100 %')),
+  uncertainty: quantity('The uncertainty', (n) => n.min(0, 'An uncertainty is not negative').max(100, 'An uncertainty is at most 100 %')).optional().default(null),
+})
+export type AnalysisRowBody = z.output<typeof AnalysisRowSchema>
+
 export const ComponentSchema = z.strictObject({
   z: z.coerce.number({ error: 'Choose an element' }).int().min(1, 'Choose an element').max(118, 'Choose an element'),
   massNumber: z.preprocess(blankToNull, z.coerce.number().int('A mass number is a whole number').min(1).max(300).nullable()),
@@ -39,6 +47,13 @@ export const ComponentSchema = z.strictObject({
   enrichmentPercent: quantity('The enrichment', (n) => n.gt(0, 'Enrichment is more than 0 %').lte(100, 'Enrichment is at most 100 %')).optional().default(null),
   fractionUncertainty: quantity('The uncertainty', (n) => n.min(0, 'An uncertainty is not negative')).optional().default(null),
   enrichmentUncertainty: quantity('The uncertainty', (n) => n.min(0, 'An uncertainty is not negative')).optional().default(null),
+  // No analysis is null; an empty list means the same.
+  analysis: z
+    .array(AnalysisRowSchema)
+    .max(40, 'At most 40 isotopes in an analysis')
+    .nullable()
+    .optional()
+    .transform((v) => (v && v.length ? v : null)),
 })
 export type ComponentBody = z.output<typeof ComponentSchema>
 
@@ -71,6 +86,16 @@ function checkComponents(components: ComponentBody[], ctx: z.RefinementCtx) {
     if (c.massNumber === null && c.enrichmentPercent !== null) issue([i, 'enrichmentPercent'], 'Enrichment belongs to a named isotope; leave it empty for the natural element')
     if (c.enrichmentUncertainty !== null && c.enrichmentPercent === null) issue([i, 'enrichmentUncertainty'], 'Give the enrichment this uncertainty belongs to')
     if (i > 0 && c.basis !== components[0]!.basis) issue([i, 'basis'], 'Give every fraction on the same basis (all atom or all mass fractions)')
+    if (c.analysis) {
+      if (c.enrichmentPercent !== null) issue([i, 'enrichmentPercent'], 'Give either the enrichment or the full isotopic analysis, not both')
+      const problem = analysisProblem(c.z, c.massNumber, c.analysis)
+      if (problem) issue([i, 'analysis'], problem)
+      return
+    }
+    if (c.massNumber !== null && c.enrichmentPercent === null && element.isotopes.some((n) => n.massNumber === c.massNumber) && needsEnrichment(c.z, c.massNumber)) {
+      issue([i, 'enrichmentPercent'], `Give the enrichment of ${c.massNumber}${element.symbol} in % as the supplier states it, or its full isotopic analysis`)
+      return
+    }
     const makeUp = isotopicMakeUp(c.z, c.massNumber, c.enrichmentPercent)
     if (!makeUp.ok) issue([i, c.massNumber === null ? 'z' : 'massNumber'], makeUp.message)
   })

@@ -113,6 +113,15 @@ export interface SampleComponentRow {
   enrichment_unc_pct: number | null
 }
 
+export interface SampleComponentIsotopeRow {
+  id: number
+  component_id: number
+  position: number
+  mass_number: number
+  atom_pct: number
+  atom_unc_pct: number | null
+}
+
 export interface DatasheetRow {
   id: string
   sample_id: string

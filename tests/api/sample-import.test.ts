@@ -24,7 +24,7 @@ describe('CSV import', () => {
       `${tag} good,Gold,Au,foil,200,${place},,Au 1,atom`,
       `${tag} bad form,Gold,Au,blanket,200,,,Au 1,atom`,
       `${tag} bad sum,Lithium fluoride,LiF,foil,150,NO-SUCH-PLACE,,Li-7 0.5 enr 99.9%; F 0.4,atom`,
-      `"${tag} bad hazard, quoted",Lead,Pb,foil,400,,H360 H999,Pb-208 1,atom`,
+      `"${tag} bad hazard, quoted",Lead,Pb,foil,400,,H360 H999,Pb-208 1 enr 99%,atom`,
       `${tag} bad composition,Nickel,Ni,foil,abc,,,Nickel one,atom`,
     )
     const r = await post(file, true)

@@ -20,7 +20,7 @@ describe('a sample from registration to retirement', () => {
     expect(a.code).toMatch(/^S-\d{4}-\d{6}$/)
     expect(Number(b.code.slice(7))).toBeGreaterThan(Number(a.code.slice(7)))
     expect(a.version).toBe(1)
-    expect(a.components).toEqual([{ z: 28, massNumber: null, fraction: 1, basis: 'atom', enrichmentPercent: null, fractionUncertainty: null, enrichmentUncertainty: null }])
+    expect(a.components).toEqual([{ z: 28, massNumber: null, fraction: 1, basis: 'atom', enrichmentPercent: null, fractionUncertainty: null, enrichmentUncertainty: null, analysis: null }])
     expect(a.hazardKinds).toEqual([])
     const audit = await auditOf(a.id)
     expect(audit.map((r) => r.action)).toEqual(['sample.created'])
@@ -73,13 +73,13 @@ describe('a sample from registration to retirement', () => {
       version: 1,
       components: [
         { z: 28, massNumber: 58, fraction: 0.7, basis: 'atom', enrichmentPercent: 99.5 },
-        { z: 28, massNumber: 60, fraction: 0.3, basis: 'atom' },
+        { z: 28, massNumber: 60, fraction: 0.3, basis: 'atom', enrichmentPercent: 98.1 },
       ],
     })
     expect(r.status).toBe(200)
     expect(r.body.components.map((x: { massNumber: number }) => x.massNumber)).toEqual([58, 60])
     const rows = await testDb()('sample_components').where({ sample_id: s.id }).orderBy('position')
-    expect(rows.map((x) => [x.mass_number, x.fraction, x.enrichment_pct])).toEqual([[58, 0.7, 99.5], [60, 0.3, null]])
+    expect(rows.map((x) => [x.mass_number, x.fraction, x.enrichment_pct])).toEqual([[58, 0.7, 99.5], [60, 0.3, 98.1]])
   })
 
   it('retires instead of deleting, hides retired samples from the default list, and restores on request', async () => {
@@ -132,7 +132,7 @@ describe('what a sample must be', () => {
     expect(issues(r).map((i) => i.path).sort()).toEqual(['activityBq', 'nuclide'])
     const r2 = await manager.post('/api/samples', sampleBody({ nuclide: 'U-238' }))
     expect(issues(r2).map((i) => i.path)).toEqual(['nuclide'])
-    const ok = await createSample(manager, { radioactive: true, nuclide: '238u', activityBq: 12, components: [{ z: 92, massNumber: 238, fraction: 1, basis: 'atom' }] })
+    const ok = await createSample(manager, { radioactive: true, nuclide: '238u', activityBq: 12, components: [{ z: 92, massNumber: 238, fraction: 1, basis: 'atom', enrichmentPercent: 99.8 }] })
     expect(ok.nuclide).toBe('U-238')
     expect(ok.hazardKinds).toContain('radioactive')
   })

@@ -2,6 +2,7 @@ import { stringify } from 'csv-stringify/sync'
 import { CAN } from '#shared/auth/roles'
 import { SampleListQuery } from '#shared/schemas/samples'
 import { CSV_COLUMNS, formatComposition } from '#shared/samples/csv'
+import { csvMeasured } from '#shared/format/measured'
 import type { ComponentBody } from '#shared/schemas/samples'
 import type { SampleRow } from '#shared/types/db'
 
@@ -11,7 +12,9 @@ type ExportRow = SampleRow & { location_code: string | null; composition: Compon
 const CSV_LIMIT = 100_000
 
 const FULL_COMPOSITION = `(select coalesce(json_agg(json_build_object('z', c.z, 'massNumber', c.mass_number, 'fraction', c.fraction, 'basis', c.fraction_basis,
-  'enrichmentPercent', c.enrichment_pct, 'fractionUncertainty', c.fraction_unc, 'enrichmentUncertainty', c.enrichment_unc_pct) order by c.position), '[]')
+  'enrichmentPercent', c.enrichment_pct, 'fractionUncertainty', c.fraction_unc, 'enrichmentUncertainty', c.enrichment_unc_pct,
+  'analysis', (select json_agg(json_build_object('massNumber', i.mass_number, 'percent', i.atom_pct, 'uncertainty', i.atom_unc_pct) order by i.position)
+    from sample_component_isotopes i where i.component_id = c.id)) order by c.position), '[]')
   from sample_components c where c.sample_id = s.id) as composition`
 
 export default defineEventHandler(async (event) => {
@@ -23,9 +26,11 @@ export default defineEventHandler(async (event) => {
     const rows = (await orderSamples(filteredSamples(db, query).select('s.*', 'l.code as location_code', db.raw(FULL_COMPOSITION)), query.sort).limit(CSV_LIMIT)) as ExportRow[]
     const csv = stringify(
       rows.map((r) => {
+        // Rounded to its uncertainty (two significant digits of u, JCGM 100:2008 §7.2.6), as on every page.
+        const [areal, arealU] = csvMeasured(r.areal_density_ug_cm2, r.areal_density_unc_ug_cm2)
         const values: Record<(typeof CSV_COLUMNS)[number], unknown> = {
           code: r.code, name: r.name, material: r.material, formula: r.formula, form: r.form, status: r.status,
-          areal_density_ug_cm2: r.areal_density_ug_cm2, areal_density_unc_ug_cm2: r.areal_density_unc_ug_cm2, thickness_nm: r.thickness_nm,
+          areal_density_ug_cm2: areal, areal_density_unc_ug_cm2: arealU, thickness_nm: r.thickness_nm,
           bulk_density_g_cm3: r.bulk_density_g_cm3, mass_mg: r.mass_mg, backing: r.backing, supplier: r.supplier, lot: r.lot,
           received_on: r.received_on, recertify_by: r.recertify_by, location: r.location_code, hazard_statements: r.hazard_statements.join(' '),
           radioactive: r.radioactive ? 'yes' : 'no', nuclide: r.nuclide, activity_bq: r.activity_bq, composition: formatComposition(r.composition),

@@ -52,7 +52,24 @@ describe('the payload of a sample certificate', () => {
     expect(p.hazards.statements.map((s) => s.code)).toEqual(['H317', 'H351', 'H372'])
     expect(p.hazards.statements[0]!.text).toBe('May cause an allergic skin reaction')
     expect(p.hazards.cautions.map((c) => c.kind)).toEqual(['toxic'])
-    expect(p.hazards.deferral).toMatch(/radiation-protection and safety officers/)
+    expect(p.hazards.deferral).toMatch(/safety officers direct/)
+    // Radiation protection is named only on a radioactive sample's certificate.
+    expect(p.hazards.deferral).not.toMatch(/radiation/i)
+    const r = samplePayload({ ...sample, radioactive: true, nuclide: 'U-238', activityBq: 8.5 }, [], ctx)
+    expect(r.hazards.deferral).toMatch(/radiation protection officer/)
+  })
+
+  it('cites the evaluations behind the isotope data, not the package that carries them', () => {
+    expect(p.method.dataSources.join(' ')).toContain('AME2016, M. Wang, G. Audi, F. G. Kondev, W. J. Huang, S. Naimi, X. Xu, Chin. Phys. C 41, 030003 (2017)')
+    expect(p.method.dataSources.join(' ')).toContain('K. J. R. Rosman, P. D. P. Taylor, Pure Appl. Chem. 70, 217 (1998)')
+    expect(p.method.dataSources[2]).toMatch(/^Carried in Ionfolio by/)
+  })
+
+  it('carries the enrichment uncertainty into every isotope and the mean atomic mass', () => {
+    const ni60 = p.properties.isotopes.find((i) => i.label === '⁶⁰Ni')!
+    // u(x₆₀)/x₆₀ = u(e)/(1 − e) = 0.05/0.39 (the closure, shared/samples/propagation.ts)
+    expect(ni60.atomFractionUncertainty! / ni60.atomFraction).toBeCloseTo(0.05 / 0.39, 6)
+    expect(p.properties.meanAtomicMass!.uncertainty).toBeGreaterThan(0)
   })
 
   it('lists the supplier documents on file with their digests', () => {

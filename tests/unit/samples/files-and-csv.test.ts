@@ -1,3 +1,4 @@
+import { parseAnalysisCsv } from '../../../shared/samples/analysis-csv'
 import { describe, expect, it } from 'vitest'
 import { cleanFileName, contentDisposition, kindFromName, magicMatches, TextChecker } from '../../../shared/samples/filetypes'
 import { csvRecordToInput, formatComposition, parseComposition } from '../../../shared/samples/csv'
@@ -42,16 +43,46 @@ describe('datasheet file types', () => {
 describe('the composition cell of the sample CSV', () => {
   it('writes and reads back the same components', () => {
     const components = [
-      { z: 20, massNumber: 48, fraction: 0.2, enrichmentPercent: 97.8, fractionUncertainty: 0.01, enrichmentUncertainty: 0.2 },
-      { z: 6, massNumber: null, fraction: 0.2, enrichmentPercent: null, fractionUncertainty: null, enrichmentUncertainty: null },
-      { z: 8, massNumber: null, fraction: 0.6, enrichmentPercent: null, fractionUncertainty: null, enrichmentUncertainty: null },
+      { z: 20, massNumber: 48, fraction: 0.2, enrichmentPercent: 97.8, fractionUncertainty: 0.01, enrichmentUncertainty: 0.2, analysis: null },
+      { z: 6, massNumber: null, fraction: 0.2, enrichmentPercent: null, fractionUncertainty: null, enrichmentUncertainty: null, analysis: null },
+      { z: 8, massNumber: null, fraction: 0.6, enrichmentPercent: null, fractionUncertainty: null, enrichmentUncertainty: null, analysis: null },
     ]
     const cell = formatComposition(components)
-    expect(cell).toBe('Ca-48 0.2±0.01 enr 97.8±0.2%; C 0.2; O 0.6')
+    // Each value with an uncertainty is written to the uncertainty's second significant digit (JCGM 100:2008 §7.2.6).
+    expect(cell).toBe('Ca-48 0.200±0.010 enr 97.80±0.20%; C 0.2; O 0.6')
     const back = parseComposition(cell, 'atom')
     expect(back.problem).toBeNull()
     const parsed = SampleBody.parse({ name: 'x', material: 'y', form: 'powder', components: back.components })
     expect(parsed.components.map(({ basis: _b, ...c }) => c)).toEqual(components)
+  })
+
+  it('writes and reads back a full isotopic analysis', () => {
+    const analysis = [
+      { massNumber: 58, percent: 99.61, uncertainty: 0.05 },
+      { massNumber: 60, percent: 0.33, uncertainty: 0.04 },
+      { massNumber: 61, percent: 0.01, uncertainty: null },
+      { massNumber: 62, percent: 0.04, uncertainty: 0.01 },
+      { massNumber: 64, percent: 0.01, uncertainty: 0.005 },
+    ]
+    const cell = formatComposition([{ z: 28, massNumber: 58, fraction: 1, enrichmentPercent: null, fractionUncertainty: null, enrichmentUncertainty: null, analysis }])
+    expect(cell).toBe('Ni-58 1 iso[58=99.610±0.050 60=0.330±0.040 61=0.01 62=0.040±0.010 64=0.0100±0.0050]%')
+    const back = parseComposition(cell, 'atom')
+    expect(back.problem).toBeNull()
+    const parsed = SampleBody.parse({ name: 'x', material: 'y', form: 'foil', components: back.components })
+    expect(parsed.components[0]!.analysis).toEqual(analysis)
+    expect(parseComposition('Ni-58 1 iso[58:99 60=1]%', 'atom').problem).toContain('iso[58=99.30±0.05')
+  })
+
+  it('reads a supplier CSV datasheet of an isotopic analysis, column names matched loosely', () => {
+    const file = 'Lot,Isotope,Atom %,Uncertainty %,Method\nQI-1,Ni-58,99.61,0.05,TIMS\nQI-1,60Ni,0.33,0.04,TIMS\nQI-1,61,0.06,,TIMS\nQI-1,Fe-56,0.1,0.1,TIMS\n'
+    const r = parseAnalysisCsv(file, 28)
+    expect(r.rows).toEqual([
+      { massNumber: 58, percent: 99.61, uncertainty: 0.05 },
+      { massNumber: 60, percent: 0.33, uncertainty: 0.04 },
+      { massNumber: 61, percent: 0.06, uncertainty: null },
+    ])
+    expect(r.problems).toEqual(['Line 5: "Fe-56" is not an isotope of this element'])
+    expect(parseAnalysisCsv('mass,weight\n58,1\n', 28).problems[0]).toContain('header must name')
   })
 
   it('explains a cell it cannot read', () => {
