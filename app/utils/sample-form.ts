@@ -45,6 +45,7 @@ export interface SampleFormState {
   radioactive: boolean
   nuclide: string
   activityBq: string
+  activityReferenceDate: string
   notes: string
   basis: 'atom' | 'mass'
   components: ComponentRow[]
@@ -86,7 +87,7 @@ export function formState(s?: StoredSample | null): SampleFormState {
     name: f('name'), material: f('material'), formula: f('formula'), form: f('form') || 'foil', status: s && s.status !== 'retired' ? f('status') : 'available',
     arealDensity: f('arealDensity'), arealDensityUncertainty: f('arealDensityUncertainty'), thickness: f('thickness'), bulkDensity: f('bulkDensity'), massMg: f('massMg'),
     backing: f('backing'), supplier: f('supplier'), lot: f('lot'), receivedOn: f('receivedOn'), recertifyBy: f('recertifyBy'), locationId: f('locationId'),
-    hazardStatements: (s?.hazardStatements ?? []).join(' '), radioactive: s?.radioactive ?? false, nuclide: f('nuclide'), activityBq: f('activityBq'), notes: f('notes'),
+    hazardStatements: (s?.hazardStatements ?? []).join(' '), radioactive: s?.radioactive ?? false, nuclide: f('nuclide'), activityBq: f('activityBq'), activityReferenceDate: f('activityReferenceDate'), notes: f('notes'),
     basis: s?.components[0]?.basis === 'mass' ? 'mass' : 'atom',
     components: s?.components.length
       ? s.components.map((c) => ({

@@ -3,6 +3,7 @@
 import { HEADINGS } from '../../shared/certificates/payload'
 import type { SamplePayload, Quantity } from '../../shared/certificates/sample-payload'
 import { formatMeasured, formatPlain } from '../../shared/format/measured'
+import { formatDay } from '../../shared/certificates/format'
 import { runs } from './fonts'
 import { heading, para, sideBySide, table, MUTED } from './certificate-parts'
 
@@ -26,6 +27,22 @@ function isotopics(c: Component): string {
   return c.massNumber === null ? 'natural isotopic composition' : '100 % (the only natural isotope)'
 }
 
+type Radioactivity = SamplePayload['properties']['radioactivity']
+
+// The recorded activity with its reference date, and the activity at issue corrected for decay
+// (older payloads carry the recorded activity alone).
+function activityRows(r: Radioactivity): string[][] {
+  if (!r) return []
+  const x = r as NonNullable<Radioactivity> & Partial<{ referenceDate: string | null; atIssue: { on: string; activityBq: number; daughters: { nuclide: string; activityBq: number }[]; decayCorrected: boolean } | null }>
+  const nuclide = x.nuclide ?? 'nuclide not recorded'
+  const rows = [['Activity', formatPlain(x.activityBq), 'Bq', x.referenceDate ? `${nuclide}, recorded for ${formatDay(x.referenceDate)}` : nuclide]]
+  if (x.atIssue) {
+    rows.push(['Activity at issue', formatPlain(x.atIssue.activityBq), 'Bq', x.atIssue.decayCorrected ? `${nuclide} on ${formatDay(x.atIssue.on)}, decay-corrected` : `${nuclide}: half-life not in the table, as recorded`])
+    for (const d of x.atIssue.daughters) rows.push([`  daughter ${d.nuclide}`, formatPlain(d.activityBq), 'Bq', `grown in by ${formatDay(x.atIssue.on)}`])
+  }
+  return rows
+}
+
 function properties(p: SamplePayload): Block[] {
   const pr = p.properties
   const rows = [
@@ -34,7 +51,7 @@ function properties(p: SamplePayload): Block[] {
     quantityRow('Bulk density', pr.bulkDensity),
     quantityRow('Mass at issue', pr.mass),
     quantityRow('Mean atomic mass', pr.meanAtomicMass),
-    pr.radioactivity ? ['Activity', formatPlain(pr.radioactivity.activityBq), 'Bq', pr.radioactivity.nuclide ?? 'nuclide not recorded'] : null,
+    ...activityRows(pr.radioactivity),
   ].filter((r): r is string[] => r !== null)
   const first: Block[] = rows.length ? [table(['Quantity', 'Value', 'Unit', 'Basis'], rows, [90, 110, 40, '*'])] : []
   const rest: Block[] = []
@@ -74,6 +91,8 @@ function properties(p: SamplePayload): Block[] {
     })
   }
   rest.push(para(pr.uncertaintyNote, { style: 'small' }))
+  const radio = pr.radioactivity as (Radioactivity & { sources?: string }) | null
+  if (radio?.sources) rest.push(para(`Activity: ${radio.sources} The institution's radiation protection officer keeps the authoritative record.`, { style: 'small' }))
   if (!first.length) return section(HEADINGS.properties, rest.slice(0, 1), rest.slice(1))
   return section(HEADINGS.properties, first, rest)
 }

@@ -96,6 +96,8 @@ export async function applyCustody(trx: Knex.Transaction, event: H3Event, user: 
     }
   }
 
+  // A move of a radioactive source that crosses a licence limit is made, and answered with a warning.
+  const licence = before.radioactive && changes.location_id ? await licenceWarnings(trx, { move: { sampleId, locationId: changes.location_id as string } }) : []
   const [row] = await trx('samples')
     .where({ id: sampleId, version: a.version })
     .update({ ...changes, version: a.version + 1, updated_by: user.id, updated_at: trx.fn.now() })
@@ -105,5 +107,5 @@ export async function applyCustody(trx: Knex.Transaction, event: H3Event, user: 
   await trx('custody_events').insert({ sample_id: sampleId, kind, details: JSON.stringify(details) as never, by: user.id })
   const after = (await findSample(trx, sampleId))!
   await writeAudit(trx, event, { action: `sample.custody.${kind.replace('_', '-')}`, entityType: 'sample', entityId: sampleId, before, after: { ...after, custody: { kind, ...details } } })
-  return { sample: after, custody: await custodyState(trx, sampleId) }
+  return { sample: after, custody: await custodyState(trx, sampleId), licenceWarnings: licence }
 }

@@ -1,6 +1,6 @@
 import knexFactory, { type Knex } from 'knex'
 import pg from 'pg'
-import type { AuditRow, CertificateRow, CustodyEventRow, DatasheetRow, NoticeRow, SampleCheckoutRow, InvitationRow, LocationRow, SampleComponentIsotopeRow, SampleComponentRow, SampleRow, SampleSpeciesRow, ScfCacheRow, SessionRow, SignInFailureRow, SpeciesResultRow, SpeciesRow, UserRow } from '#shared/types/db'
+import type { AuditRow, CertificateRow, CustodyEventRow, DatasheetRow, NoticeRow, SampleCheckoutRow, InvitationRow, LocationRow, LicenceLimitRow, SampleComponentIsotopeRow, SampleComponentRow, SampleRow, SampleSpeciesRow, ScfCacheRow, SessionRow, SignInFailureRow, SpeciesResultRow, SpeciesRow, UserRow } from '#shared/types/db'
 
 // Typed tables: `db('users')` knows its columns. Declared here, beside useDb, so every
 // project that compiles a route (the server's and the pages' type inference) sees it.
@@ -15,6 +15,7 @@ declare module 'knex/types/tables' {
     samples: SampleRow
     sample_components: SampleComponentRow
     sample_component_isotopes: SampleComponentIsotopeRow
+    licence_limits: LicenceLimitRow
     datasheets: DatasheetRow
     species_scf_cache: ScfCacheRow
     species: SpeciesRow

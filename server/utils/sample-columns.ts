@@ -29,6 +29,7 @@ export function sampleColumns(s: SampleData) {
     radioactive: s.radioactive,
     nuclide: s.nuclide,
     activity_bq: s.activityBq,
+    activity_reference_on: s.activityReferenceDate,
     notes: s.notes,
   }
 }

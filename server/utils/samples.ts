@@ -69,6 +69,7 @@ export function sampleRecord(row: SampleRow, components: SampleComponentRow[], p
     radioactive: row.radioactive,
     nuclide: row.nuclide,
     activityBq: row.activity_bq,
+    activityReferenceDate: row.activity_reference_on,
     notes: row.notes,
     components: [...components].sort((a, b) => a.position - b.position).map((c) => componentOut(c, analyses)),
     version: row.version,

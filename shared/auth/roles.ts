@@ -27,6 +27,10 @@ export const CAN = {
   runNotices: ['manager'],
   readAudit: ['manager', 'auditor'],
   managePeople: ['manager'],
+  // The radioactive-source inventory: read by the managers and auditors (the radiation protection
+  // officer's role here); licence limits set by managers.
+  readInventory: ['manager', 'auditor'],
+  manageLicence: ['manager'],
 } as const satisfies Record<string, readonly Role[]>
 
 export type Capability = keyof typeof CAN

@@ -10,6 +10,7 @@ import { ISOTOPE_DATA_SOURCES } from '../samples/composition'
 import { FORM_LABELS, type SampleForm } from '../samples/vocabulary'
 import { getElement } from '../physics/elements'
 import { formatDay } from './format'
+import { activityOn, BATEMAN_SOURCE, HALF_LIFE_SOURCE } from '../radioactivity/decay'
 import { formulaText } from '../labels/content'
 import { payloadHead, type IssueContext, type PayloadHead } from './payload'
 
@@ -35,6 +36,8 @@ export interface CertSampleInput {
   radioactive: boolean
   nuclide: string | null
   activityBq: number | null
+  /** the date the recorded activity refers to; else the date received */
+  activityReferenceDate?: string | null
   components: {
     z: number
     massNumber: number | null
@@ -86,6 +89,20 @@ function describe(s: CertSampleInput): string {
   return parts.join(' ')
 }
 
+// The recorded activity, its reference date, and the activity on the day of issue corrected for
+// decay, with the daughters grown in since (printed with their sources).
+function radioactivity(s: CertSampleInput, issuedAt: string) {
+  const referenceDate = s.activityReferenceDate ?? s.receivedOn ?? null
+  const atIssue = s.nuclide && s.activityBq !== null && referenceDate ? activityOn(s.nuclide, s.activityBq, referenceDate, issuedAt) : null
+  return {
+    nuclide: s.nuclide,
+    activityBq: s.activityBq,
+    referenceDate,
+    atIssue: atIssue ? { on: issuedAt.slice(0, 10), activityBq: atIssue.activityBq, daughters: atIssue.daughters, decayCorrected: atIssue.known } : null,
+    sources: `Half-lives: ${HALF_LIFE_SOURCE}. Daughters grow in by the Bateman equations (${BATEMAN_SOURCE}), taken as absent at the reference date.`,
+  }
+}
+
 /** The payload of a certificate for `s`, as of `ctx` (number, version, issuer, date). */
 export function samplePayload(s: CertSampleInput, datasheets: { fileName: string; sha256: string }[], ctx: IssueContext) {
   const derived = deriveSample(s)
@@ -125,7 +142,7 @@ export function samplePayload(s: CertSampleInput, datasheets: { fileName: string
             atomsPerCm2Uncertainty: i.atomsPerCm2Uncertainty,
           }))
         : [],
-      radioactivity: s.radioactive ? { nuclide: s.nuclide, activityBq: s.activityBq } : null,
+      radioactivity: s.radioactive ? radioactivity(s, ctx.issuedAt) : null,
       uncertaintyNote:
         "Uncertainties are standard uncertainties (k = 1) unless the supplier's documentation states another coverage; each value is rounded to its uncertainty, given to two significant digits (JCGM 100:2008, 7.2.6). Derived uncertainties: GUM first-order propagation (JCGM 100:2008, 5.1.2) of every recorded uncertainty through the model, including the closure of the isotope fractions (they sum to 1, so an enrichment's uncertainty reaches the other isotopes fully correlated, and an analysis is normalised with its covariance); checked against a Monte Carlo propagation (JCGM 101:2008). Isotope masses and natural abundances are taken as exact.",
     },

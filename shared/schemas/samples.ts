@@ -126,6 +126,7 @@ const SampleFields = z.strictObject({
   radioactive: z.boolean({ error: 'Radioactive is true or false' }),
   nuclide,
   activityBq: quantity('The activity', (n) => n.gt(0, 'The activity is more than 0 Bq')),
+  activityReferenceDate: isoDate,
   notes: text(4000),
   components: z.array(ComponentSchema).max(40, 'At most 40 components').superRefine(checkComponents),
 })
@@ -149,13 +150,14 @@ const UNCERTAINTY_NEEDS_VALUE = rule(['arealDensity', 'arealDensityUncertainty']
 const DATES_IN_ORDER = rule(['receivedOn', 'recertifyBy'], (s, issue) => {
   if (s.receivedOn && s.recertifyBy && s.recertifyBy < s.receivedOn) issue('recertifyBy', 'The re-certify-by date cannot be before the date received')
 })
-const RADIOACTIVE_NEEDS_NUCLIDE = rule(['radioactive', 'nuclide', 'activityBq'], (s, issue) => {
+const RADIOACTIVE_NEEDS_NUCLIDE = rule(['radioactive', 'nuclide', 'activityBq', 'activityReferenceDate'], (s, issue) => {
   if (s.radioactive) {
     if (!s.nuclide) issue('nuclide', 'A radioactive sample needs its nuclide, e.g. U-238')
     if (s.activityBq === null) issue('activityBq', 'A radioactive sample needs its activity in Bq')
   } else {
     if (s.nuclide) issue('nuclide', 'Tick "radioactive", or leave the nuclide empty')
     if (s.activityBq !== null) issue('activityBq', 'Tick "radioactive", or leave the activity empty')
+    if (s.activityReferenceDate) issue('activityReferenceDate', 'Tick "radioactive", or leave the reference date empty')
   }
 })
 
@@ -178,6 +180,7 @@ export const SampleBody = SampleFields.extend({
   radioactive: SampleFields.shape.radioactive.optional().default(false),
   nuclide: SampleFields.shape.nuclide.optional().default(null),
   activityBq: SampleFields.shape.activityBq.optional().default(null),
+  activityReferenceDate: SampleFields.shape.activityReferenceDate.optional().default(null),
   notes: SampleFields.shape.notes.optional().default(null),
   components: SampleFields.shape.components.optional().default([]),
 })
@@ -268,3 +271,13 @@ export const LocationBody = z.strictObject({
 export const ImportQuery = z.object({
   dryRun: z.enum(['true', 'false', '1', '0']).optional().transform((v) => v === 'true' || v === '1'),
 })
+
+/** PUT /api/licence-limits: the limit for one nuclide, in one room or (roomId null) the whole laboratory. */
+export const LicenceLimitBody = z.strictObject({
+  nuclide,
+  roomId: z.preprocess(blankToNull, z.uuid({ error: 'Choose a room from the list, or none for the whole laboratory' }).nullable()).optional().default(null),
+  limitBq: z.preprocess(toNumber, z.number({ error: 'Enter the limit in Bq' }).gt(0, 'The limit must be more than 0 Bq')),
+}).refine((v) => v.nuclide !== null, { path: ['nuclide'], message: 'Name the nuclide, e.g. Am-241' })
+
+/** GET /api/inventory. */
+export const InventoryQuery = z.object({ format: z.enum(['json', 'csv']).default('json') })

@@ -89,6 +89,7 @@ export interface SampleRow {
   radioactive: boolean
   nuclide: string | null
   activity_bq: number | null
+  activity_reference_on: string | null
   notes: string | null
   version: number
   created_by: string | null
@@ -111,6 +112,15 @@ export interface SampleComponentRow {
   enrichment_pct: number | null
   fraction_unc: number | null
   enrichment_unc_pct: number | null
+}
+
+export interface LicenceLimitRow {
+  id: string
+  nuclide: string
+  location_id: string | null
+  limit_bq: number
+  set_by: string | null
+  updated_at: Date
 }
 
 export interface SampleComponentIsotopeRow {

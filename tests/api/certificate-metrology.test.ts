@@ -101,11 +101,17 @@ describe('a radioactive sample\'s certificate', () => {
       radioactive: true,
       nuclide: 'U-238',
       activityBq: 8.5,
+      activityReferenceDate: '2024-03-01',
       components: [{ z: 92, massNumber: 238, fraction: 0.2, basis: 'atom', enrichmentPercent: 99.8 }, { z: 9, massNumber: null, fraction: 0.8, basis: 'atom' }],
     })
     const cert = await issue(manager, 'sample', s.id)
     const t = oneLine(await pdfText(await pdfOf(manager, cert.id)))
     expect(t).toContain("institution's radiation protection officer")
+    // The activity with its decay reference date, the activity at issue, and the grown-in daughters.
+    expect(t).toMatch(/U-238, recorded for (1 Mar 2024|2024-03-01)/)
+    expect(t).toMatch(/Activity at issue 8\.5 Bq U-238 on .* decay-corrected/)
+    expect(t).toMatch(/daughter Th-234 8\.5 Bq/)
+    expect(t).toContain('NUBASE2020')
     expect(orphanHeadings(await pdfText(await pdfOf(manager, cert.id)))).toEqual([])
   })
 })

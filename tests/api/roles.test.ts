@@ -56,6 +56,11 @@ const MATRIX: Array<{ route: string; method: string; body?: unknown; expect: Rec
   { method: 'POST', route: `/api/samples/${randomUUID()}/custody`, body: { action: 'condition', version: 1, note: 'fine' }, expect: { manager: 404, scientist: 403, technician: 404, auditor: 403, anonymous: 401 } },
   { method: 'GET', route: `/api/samples/${randomUUID()}/custody`, expect: { manager: 404, scientist: 404, technician: 404, auditor: 404, anonymous: 401 } },
   { method: 'POST', route: '/api/notices/run', expect: { manager: 200, scientist: 403, technician: 403, auditor: 403, anonymous: 401 } },
+  { method: 'GET', route: '/api/inventory', expect: { manager: 200, scientist: 403, technician: 403, auditor: 200, anonymous: 401 } },
+  { method: 'GET', route: '/api/inventory?format=csv', expect: { manager: 200, scientist: 403, technician: 403, auditor: 200, anonymous: 401 } },
+  { method: 'GET', route: '/api/licence-limits', expect: { manager: 200, scientist: 403, technician: 403, auditor: 200, anonymous: 401 } },
+  { method: 'PUT', route: '/api/licence-limits', body: { nuclide: 'Nonsense-1', limitBq: 1 }, expect: { manager: 400, scientist: 403, technician: 403, auditor: 403, anonymous: 401 } },
+  { method: 'DELETE', route: `/api/licence-limits/${randomUUID()}`, expect: { manager: 404, scientist: 403, technician: 403, auditor: 403, anonymous: 401 } },
 ]
 
 const cases = MATRIX.flatMap((m) => (Object.keys(m.expect) as Who[]).map((who) => [m.method, m.route, who, m.expect[who], m.body] as const))

@@ -6,10 +6,14 @@ export default defineEventHandler(async (event) => {
   const body = await readValid(event, SampleBody)
 
   const db = useDb()
-  const record = await db.transaction(async (trx) => {
+  const { record, licenceWarnings: warnings } = await db.transaction(async (trx) => {
     await assertPlace(trx, body.locationId)
-    return insertSample(trx, event, body, user.id)
+    // A radioactive source is registered even over a limit (it is already in the building); the answer says so.
+    const warn = body.radioactive && body.nuclide && body.activityBq
+      ? await licenceWarnings(trx, { add: { sampleId: 'new', code: 'new', name: body.name, nuclide: body.nuclide, referenceBq: body.activityBq, referenceDate: body.activityReferenceDate ?? body.receivedOn ?? new Date().toISOString().slice(0, 10), locationId: body.locationId } })
+      : []
+    return { record: await insertSample(trx, event, body, user.id), licenceWarnings: warn }
   })
   setResponseStatus(event, 201)
-  return { ...record, datasheets: [] }
+  return { ...record, datasheets: [], licenceWarnings: warnings }
 })
