@@ -7,7 +7,7 @@ export async function up(knex: Knex): Promise<void> {
     t.text('nuclide').notNullable()
     t.uuid('location_id').references('id').inTable('locations').onDelete('CASCADE')
     t.double('limit_bq').notNullable()
-    t.uuid('set_by').references('id').inTable('users').onDelete('SET NULL')
+    t.text('set_by').references('id').inTable('users').onDelete('SET NULL')
     t.timestamp('updated_at', { useTz: true }).notNullable().defaultTo(knex.fn.now())
   })
   await knex.raw(`

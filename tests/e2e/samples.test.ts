@@ -14,11 +14,12 @@ afterAll(async () => {
 
 const PDF = Buffer.from('%PDF-1.4\n1 0 obj << /Type /Catalog >> endobj\ntrailer << /Root 1 0 R >>\n%%EOF\n', 'latin1')
 
-async function component(page: Page, index: number, z: string, massNumber: string, fraction: string) {
+async function component(page: Page, index: number, z: string, massNumber: string, fraction: string, enrichment?: string) {
   const row = page.getByTestId(`component-${index}`)
   await row.locator('select').nth(0).selectOption(z)
   await row.locator('select').nth(1).selectOption(massNumber)
   await row.getByLabel(/fraction$/i).first().fill(fraction)
+  if (enrichment) await row.getByLabel('Enrichment %').fill(enrichment)
 }
 
 describe('the sample registry in the browser', () => {
@@ -34,7 +35,7 @@ describe('the sample registry in the browser', () => {
     await page.fill('#s-name', `Nickel pair ${tag}`)
     await page.fill('#s-material', 'Nickel metal, 58Ni and 60Ni')
     await page.fill('#s-formula', 'Ni')
-    await component(page, 0, '28', '58', '0.7')
+    await component(page, 0, '28', '58', '0.7', '99.3')
     await page.getByTestId('add-component').click()
     await expect(page.evaluate(() => document.activeElement?.closest('[data-testid=component-1]') !== null)).resolves.toBe(true)
     await component(page, 1, '28', '60', '0.2')
@@ -45,10 +46,22 @@ describe('the sample registry in the browser', () => {
     await page.getByRole('button', { name: 'Register sample' }).click()
     await page.getByText(/The fractions add up to 0\.9000/).waitFor({ timeout: 5_000 })
     await page.getByText(/"H999" is not a GHS hazard statement code/).waitFor({ timeout: 5_000 })
+    // A named isotope without enrichment or analysis is an error, not 100 %.
+    await page.getByText(/Give the enrichment of 60Ni/).waitFor({ timeout: 5_000 })
     expect(new URL(page.url()).pathname).toBe('/samples/new')
     await snap(page, 'sample-form-errors')
 
     await page.getByTestId('component-1').getByLabel(/fraction$/i).first().fill('0.3')
+    // The second component gets the supplier's full analysis instead, typed from the keyboard.
+    await page.getByTestId('component-1-analysis-mode').check()
+    const lines: [string, string, string][] = [['60', '99.2', '0.1'], ['58', '0.8', '0.1']]
+    for (const [i, [a, p, u]] of lines.entries()) {
+      await page.getByTestId('component-1').getByRole('button', { name: 'Add an isotope' }).click()
+      await expect(page.evaluate(() => document.activeElement?.tagName)).resolves.toBe('SELECT')
+      await page.getByLabel(`Isotope of line ${i + 1}`).selectOption(a)
+      await page.getByLabel(`Atom % of line ${i + 1}`).fill(p)
+      await page.getByLabel(`Uncertainty in % of line ${i + 1}`).fill(u)
+    }
     await page.fill('#s-hazards', 'H317 H351 H372')
     await expect(page.getByTestId('fraction-sum').innerText()).resolves.toContain('1.0000')
     await snap(page, 'sample-form')
@@ -58,6 +71,9 @@ describe('the sample registry in the browser', () => {
     const isotopes = await page.getByTestId('isotopes-table').innerText()
     expect(isotopes).toContain('⁵⁸Ni')
     expect(isotopes).toContain('⁶⁰Ni')
+    // Rounded to the uncertainty: two significant digits of u, the value to the same place.
+    expect(isotopes).toMatch(/\d+\.\d+ ± 0\.\d{2,} %/)
+    await expect(page.getByTestId('analysis-table').innerText()).resolves.toContain('99.20 ± 0.10 %')
     await expect(page.getByTestId('mean-mass').innerText()).resolves.toMatch(/^58\.\d+ u$/)
     await context.close()
   })
