@@ -42,12 +42,14 @@ export interface Inventory {
   exceeded: { where: string; nuclide: string; activityBq: number; limitBq: number }[]
 }
 
+// `roomId`: a room's id, null for the laboratory, undefined for sources in no room (no limit applies).
 function totals(byNuclide: Map<string, number>, limits: readonly LicenceLimit[], roomId: string | null | undefined): Total[] {
   // A limit set for a nuclide with no source still shows, at zero.
-  const names = new Set([...byNuclide.keys(), ...limits.filter((l) => l.roomId === (roomId ?? null)).map((l) => l.nuclide)])
+  const own = roomId === undefined ? [] : limits.filter((l) => l.roomId === roomId)
+  const names = new Set([...byNuclide.keys(), ...own.map((l) => l.nuclide)])
   return [...names].sort().map((nuclide) => {
     const activityBq = byNuclide.get(nuclide) ?? 0
-    const limit = roomId === undefined ? undefined : limits.find((l) => l.nuclide === nuclide && l.roomId === roomId)
+    const limit = own.find((l) => l.nuclide === nuclide)
     const limitBq = limit ? limit.limitBq : null
     const ratio = limitBq ? activityBq / limitBq : null
     return { nuclide, activityBq, limitBq, ratio, exceeded: limitBq !== null && activityBq > limitBq }
@@ -76,7 +78,7 @@ export function buildInventory(sources: readonly Source[], limits: readonly Lice
   })
   // Rooms with a limit but no source still show.
   for (const l of limits) if (l.roomId && !rooms.has(l.roomId)) rooms.set(l.roomId, { id: l.roomId, code: '', name: '', byNuclide: new Map() })
-  const roomList = [...rooms.values()].map((r) => ({ id: r.id, code: r.code, name: r.name, totals: totals(r.byNuclide, limits, r.id) }))
+  const roomList = [...rooms.values()].map((r) => ({ id: r.id, code: r.code, name: r.name, totals: totals(r.byNuclide, limits, r.id ?? undefined) }))
   const labTotals = totals(lab, limits, null)
   const exceeded = [
     ...labTotals.filter((t) => t.exceeded).map((t) => ({ where: 'the laboratory', nuclide: t.nuclide, activityBq: t.activityBq, limitBq: t.limitBq! })),

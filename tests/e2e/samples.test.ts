@@ -74,7 +74,25 @@ describe('the sample registry in the browser', () => {
     // Rounded to the uncertainty: two significant digits of u, the value to the same place.
     expect(isotopes).toMatch(/\d+\.\d+ ± 0\.\d{2,} %/)
     await expect(page.getByTestId('analysis-table').innerText()).resolves.toContain('99.20 ± 0.10 %')
+    await snap(page, 'sample-page-analysis')
     await expect(page.getByTestId('mean-mass').innerText()).resolves.toMatch(/^58\.\d+ u$/)
+    await context.close()
+  })
+
+  it('shows a manager the radioactive sources and takes a licence limit', async () => {
+    const context = await newContext(browser)
+    const page = await context.newPage()
+    await signInAs(page, 'manager')
+    await page.goto('/inventory')
+    await waitForApp(page)
+    await expect(page.getByText(/radiation protection officer and local regulations decide/).count()).resolves.toBe(1)
+    await page.fill('#l-nuclide', '252Cf')
+    await page.fill('#l-limit', '1e6')
+    await page.getByRole('button', { name: 'Set the limit' }).click()
+    await page.getByText('The limit is set.').waitFor({ timeout: 5_000 })
+    await expect(page.getByTestId('licence-limits').innerText()).resolves.toMatch(/Cf-252\s+the whole laboratory: 1 × 10⁶ Bq/)
+    await expect(page.getByTestId('inventory-lab').innerText()).resolves.toContain('Cf-252')
+    await snap(page, 'inventory')
     await context.close()
   })
 

@@ -24,7 +24,10 @@ describe('licence totals per room and for the laboratory', () => {
     expect(lab.exceeded).toBe(true)
     // A room limit for a nuclide that room does not hold shows at zero.
     expect(inv.rooms.find((r) => r.id === 'b2')!.totals.find((t) => t.nuclide === 'Cs-137')).toMatchObject({ activityBq: 0, limitBq: 5e3, exceeded: false })
-    expect(inv.rooms.find((r) => r.id === null)!.name).toBe('Not in a room')
+    // Sources in no room count for the lab but fall under no room's limit (nor the lab's, twice).
+    const loose = inv.rooms.find((r) => r.id === null)!
+    expect(loose.name).toBe('Not in a room')
+    expect(loose.totals).toEqual([{ nuclide: 'Am-241', activityBq: expect.any(Number), limitBq: null, ratio: null, exceeded: false }])
     expect(inv.exceeded).toEqual([{ where: 'the laboratory', nuclide: 'Am-241', activityBq: expect.any(Number), limitBq: 50e3 }])
   })
 
