@@ -46,6 +46,12 @@ export default defineNuxtConfig({
       // Silence on a store connection for this long ends the call (a hung store answers 503).
       timeoutMs: 10_000,
     },
+    // The laboratory's certificate-signing key: a PKCS#12 file and its passphrase. `npm start` and
+    // `npm test` make a self-signed one under storage/signing (or their temporary folder).
+    signing: {
+      p12Path: '',
+      p12Passphrase: '',
+    },
     smtp: {
       host: '127.0.0.1',
       port: 2526,

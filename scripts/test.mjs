@@ -26,7 +26,7 @@ async function vitest(env) {
 
 if (unitOnly) process.exit(await runVitest(args, {}))
 
-ensureDebianTools({ '/usr/bin/chromium': 'chromium', '/usr/bin/pdftoppm': 'poppler-utils', '/usr/bin/pdftotext': 'poppler-utils', '/usr/bin/zbarimg': 'zbar-tools' })
+ensureDebianTools({ '/usr/bin/chromium': 'chromium', '/usr/bin/pdftoppm': 'poppler-utils', '/usr/bin/pdftotext': 'poppler-utils', '/usr/bin/pdfsig': 'poppler-utils', '/usr/bin/zbarimg': 'zbar-tools' })
 const { startServices } = await import('./lib/services.mjs')
 
 const tmp = mkdtempSync(path.join(os.tmpdir(), 'ionfolio-test-'))

@@ -5,6 +5,7 @@ import path from 'node:path'
 import { startPostgres, clusterDir } from './postgres.mjs'
 import { startObjectStore } from './objectstore.mjs'
 import { startMailInbox, startMailSpool } from './mail.mjs'
+import { ensureSigningKey } from './signing.mjs'
 
 /** Starts all three; `mail` is 'inbox' (demo, web UI) or 'spool' (tests, JSON files). */
 export async function startServices({ storage, ports, database, mail }) {
@@ -34,6 +35,8 @@ export async function startServices({ storage, ports, database, mail }) {
       NUXT_S3_BUCKET: 'ionfolio',
       NUXT_SMTP_HOST: '127.0.0.1',
       NUXT_SMTP_PORT: String(ports.smtp),
+      // The local, self-signed certificate-signing key, made on first start (scripts/lib/signing.mjs).
+      ...ensureSigningKey(path.join(storage, 'signing')),
     }
     // Migrations and seeds run as the owner; the app gets only `env` and never the owner's login.
     const migrationEnv = { ...env, IONFOLIO_MIGRATION_DATABASE_URL: pg.roleUrl('owner', database) }

@@ -77,7 +77,7 @@ export async function issueCertificate(event: H3Event, user: User, type: Subject
       })
       const digest = payloadDigest(payload)
       const links = verifyLinks(number, digest)
-      const pdf = await renderDocument(certificateDocument(payload as unknown as CertificatePayload, digest, links.url, links.page))
+      const pdf = await signPdf(await renderDocument(certificateDocument(payload as unknown as CertificatePayload, digest, links.url, links.page)), number)
       await storePdf(event, key, pdf, pdfFileName(number, version))
       stored = true
 
