@@ -9,6 +9,9 @@ let bucketReady: Promise<void> | null = null
 /** A store call that got no answer in time (a hung or frozen store). */
 export class StoreTimeoutError extends Error {}
 
+/** A stored object larger than its record says it can be: read no further. */
+export class ObjectTooLargeError extends Error {}
+
 /** The store's time limit: silence on a connection for this long ends the call (runtimeConfig.s3.timeoutMs). */
 export function storeTimeoutMs(): number {
   return Number(useRuntimeConfig().s3.timeoutMs) || 10_000
@@ -95,7 +98,7 @@ export async function readObject(key: string, maxBytes: number): Promise<Buffer>
         size += chunk.length
         if (size > maxBytes) {
           stream.destroy()
-          reject(new Error('The stored object is larger than its record allows'))
+          reject(new ObjectTooLargeError('The stored object is larger than its record allows'))
           return
         }
         chunks.push(chunk)

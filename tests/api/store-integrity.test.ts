@@ -110,6 +110,11 @@ describe('a datasheet altered in the store', () => {
     expect(bad.body.message).toMatch(/does not match its record/)
     expect(await mismatchAudits(up.body.id)).toHaveLength(1)
     await waitForMail(MANAGER, /Stored file altered or missing: datasheet isotopes\.csv/)
+    // A longer object is refused without reading past the recorded size.
+    await overwrite(key!, Buffer.concat([bytes, Buffer.alloc(1024 * 1024, 0x41)]))
+    const longer = await c.technician.get(`/api/datasheets/${up.body.id}/download`)
+    expect(longer.status).toBe(502)
+    expect((await mismatchAudits(up.body.id)).at(-1).after).toMatchObject({ oversized: true, sha256Found: null })
     await overwrite(key!, bytes)
   })
 })
