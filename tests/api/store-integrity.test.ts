@@ -32,7 +32,7 @@ async function stored(key: string): Promise<Buffer> {
 }
 
 async function mismatchAudits(entityId: string) {
-  return testDb()('audit_log').where({ action: 'storage.mismatch', entity_id: entityId })
+  return testDb()('audit_log').where({ action: 'storage.mismatch', entity_id: entityId }).orderBy('id')
 }
 
 describe('a certificate PDF altered in the store', () => {
