@@ -84,7 +84,7 @@ describe('the audit CSV and its hash chain', () => {
     expect(csv.status).toBe(200)
     const text = csv.body as string
     expect(text.split('\r\n')[0]).toBe('seq,id,at,actor,action,record_type,record_id,record,changes,address,prev_hash,row_hash')
-    expect(text).toContain(`"name: — → =HYPERLINK(""http://evil.example"")`)
+    expect(text).toContain(`name: — → =HYPERLINK(""http://evil.example"")`)
     const verdict = await verifyAuditCsv(text)
     expect(verdict).toMatchObject({ ok: true, rows: 1, lastHash: csv.headers.get('x-audit-chain-head') })
     // the export is itself audited, with the chain's head
