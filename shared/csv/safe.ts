@@ -35,3 +35,6 @@ export function safeCell(v: unknown): string {
   if (v === null || v === undefined) return ''
   return guardCell(typeof v === 'string' ? v : String(v))
 }
+
+/** csv-stringify options that guard every text cell (numbers are written as they are). */
+export const GUARDED_CSV = { cast: { string: (v: string) => guardCell(v) } } as const
