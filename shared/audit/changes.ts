@@ -17,12 +17,12 @@ export const FIELD_LABELS: Record<string, string> = {
   retiredAt: 'retired at', role: 'role', active: 'active', email: 'e-mail', reason: 'reason', number: 'number',
   supersededBy: 'replaced by', datasheet: 'datasheet', sample: 'sample', species: 'species', label: 'label',
   engine: 'engine version', methods: 'methods', rows: 'rows', codes: 'samples', layout: 'layout', copies: 'copies',
-  holder: 'taken by', run: 'for', dueBack: 'due back', mg: 'used (mg)', note: 'note', to: 'to', from: 'from',
+  custody: 'custody', holder: 'taken by', run: 'for', dueBack: 'due back', mg: 'used (mg)', note: 'note', to: 'to', from: 'from',
   scope: 'limit', until: 'until', lastHash: 'last row hash', kind: 'kind', parentId: 'inside',
 }
 
 // Book-keeping that changes with every edit and says nothing to a reader.
-const HIDDEN = new Set(['id', 'version', 'updatedAt', 'createdAt', 'updatedBy', 'createdBy', 'location', 'hazardKinds', 'custody', 'datasheets', 'invitation', 'batch', 'labelsInBatch'])
+const HIDDEN = new Set(['id', 'version', 'updatedAt', 'createdAt', 'updatedBy', 'createdBy', 'location', 'hazardKinds', 'datasheets', 'invitation', 'batch', 'labelsInBatch'])
 
 export interface ChangeLine {
   field: string
