@@ -47,7 +47,8 @@ export function speciesPayload(s: CertSpeciesInput, ctx: IssueContext) {
       ionisation: {
         unit: 'eV',
         reference: r.ionisationEnergy.reference ? { eV: r.ionisationEnergy.reference.eV, source: r.ionisationEnergy.reference.source } : null,
-        estimates: r.ionisationEnergy.estimates.map((e) => ({ method: e.method, eV: e.eV, deviationEv: e.deviationEv ?? null, deviationPercent: e.deviationPercent ?? null, basis: e.basis ?? null })),
+        // a certificate carries numbers only; a method that does not apply is left out
+        estimates: r.ionisationEnergy.estimates.flatMap((e) => (e.eV === null ? [] : [{ method: e.method, eV: e.eV, deviationEv: e.deviationEv ?? null, deviationPercent: e.deviationPercent ?? null, basis: e.basis ?? null }])),
         notes: [...r.ionisationEnergy.notes],
       },
       productionThreshold: r.productionThreshold ? { eV: r.productionThreshold.eV, from: r.productionThreshold.from, source: r.productionThreshold.source } : null,

@@ -46,10 +46,17 @@ export function formatRecord(r: SpeciesRecord): string {
     if (ie.reference) rows.push(['reference', `${eV(ie.reference.eV)} eV`, '', ie.reference.source])
     else rows.push(['reference', '—', '', r.electronAffinity && 'statement' in r.electronAffinity ? r.electronAffinity.statement : 'no reference value'])
     for (const e of ie.estimates) {
+      if (e.eV === null) {
+        rows.push([e.method, 'n/a', '', `not applicable: ${e.notApplicable ?? ''}`])
+        continue
+      }
       const deviation = e.deviationPercent === undefined ? '' : signed(e.deviationPercent, ' %')
       rows.push([e.method, `${eV(e.eV)} eV`, deviation, e.basis ?? ''])
     }
     lines.push(...table(rows, '    '))
+    for (const e of ie.estimates) {
+      for (const c of e.corrections ?? []) lines.push(`      ${e.method}: ${c.name} ${c.eV >= 0 ? '+' : '−'}${Math.abs(c.eV).toPrecision(4)} eV (${c.source})`)
+    }
     for (const note of ie.notes) lines.push(`    note: ${note}`)
   }
   if (r.productionThreshold) {

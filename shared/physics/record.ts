@@ -6,10 +6,11 @@
  */
 import type { ScfOrbital, ScfRadialDensity, ScfSpeciesEstimates } from './scf/types'
 import type { ConfigurationRule } from './configuration'
-import { METHOD_NAMES, type MethodName, diracHydrogenLikeEv, nuclearMass } from './methods'
+import { CODATA_2018, METHODS, METHOD_NAMES, type MethodName, diracHydrogenLikeEv, nuclearMass } from './methods'
+import { oneElectronEnergy } from './qed/index'
 import { formatSpecies, parseSpecies, type ParsedSpecies } from './notation'
 import type { ElectronAffinity, ReferenceGroundLevel, SourcedValue } from './reference'
-import { type Estimate, type TermSummary, estimate, round, speciesBase } from './record-parts'
+import { type Estimate, type TermSummary, judged, round, speciesBase } from './record-parts'
 import type { ScreeningRow } from './slater'
 import { subshellLabel } from './subshells'
 import type { SubshellBoxes } from './terms'
@@ -102,11 +103,20 @@ export function describeSpecies(input: string | ParsedSpecies, options: Describe
   const referenceEv = base.reference?.eV ?? null
 
   const estimates: Estimate[] = []
-  if (base.slaterHydrogenic && methods.has('slater-hydrogenic')) estimates.push(base.slaterHydrogenic)
-  if (base.slaterTotalEnergy && methods.has('slater-total-energy')) estimates.push(base.slaterTotalEnergy)
-  if (base.electrons === 1 && methods.has('dirac-hydrogen-like')) {
-    const mass = nuclearMass(z, massNumber)
-    estimates.push(estimate('dirac-hydrogen-like', diracHydrogenLikeEv(z, mass.eV), referenceEv, `reduced mass with the ${mass.basis}`))
+  const species = { z, charge, electrons: base.electrons }
+  // a bare nucleus has no electron to remove: no method is asked (the page says so)
+  const asked = (m: MethodName) => base.electrons > 0 && methods.has(m)
+  if (base.slaterHydrogenic && asked('slater-hydrogenic')) estimates.push(base.slaterHydrogenic)
+  if (base.slaterTotalEnergy && asked('slater-total-energy')) estimates.push(base.slaterTotalEnergy)
+  if (asked('dirac-hydrogen-like') || asked('dirac-qed-hydrogen-like')) {
+    const mass = base.electrons === 1 ? nuclearMass(z, massNumber) : null
+    const dirac = mass ? diracHydrogenLikeEv(z, mass.eV) : null
+    const basis = mass ? `reduced mass with the ${mass.basis}` : undefined
+    if (asked('dirac-hydrogen-like')) estimates.push(judged('dirac-hydrogen-like', species, dirac, referenceEv, { basis }))
+    if (asked('dirac-qed-hydrogen-like')) {
+      const qed = mass && dirac !== null && z <= 118 ? oneElectronEnergy(z, mass.massNumber, dirac, CODATA_2018.electronMassEv) : null
+      estimates.push(judged('dirac-qed-hydrogen-like', species, qed?.totalEv ?? null, referenceEv, { basis, corrections: qed?.corrections }))
+    }
   }
 
   const notes: string[] = []
@@ -114,9 +124,13 @@ export function describeSpecies(input: string | ParsedSpecies, options: Describe
   const scf = options.scf ?? null
   if (scf) {
     for (const note of [failure('this species', scf.species), failure('the next ion', scf.next)]) if (note) notes.push(note)
-    if (methods.has('scf-delta') && scf.deltaEv !== null) estimates.push(estimate('scf-delta', scf.deltaEv, referenceEv, scf.species.method))
-    if (methods.has('scf-eigenvalue') && scf.eigenvalueEv !== null) {
-      estimates.push(estimate('scf-eigenvalue', scf.eigenvalueEv, referenceEv, scf.species.method))
+    const missing = 'no converged self-consistent solution for this species and the next ion'
+    for (const info of METHODS) {
+      if (!info.scf || !asked(info.name)) continue
+      const value = info.name === 'scf-delta' ? scf.deltaEv : info.name === 'scf-eigenvalue' ? scf.eigenvalueEv : scf.byMethod?.[info.name]
+      // a method the caller's SCF results do not cover is left out (not computed), not "not applicable"
+      if (value === undefined) continue
+      estimates.push(judged(info.name, species, value, referenceEv, { basis: scf.species.method, missing }))
     }
     if (scf.species.converged) {
       screening = base.screening.map((row) => {

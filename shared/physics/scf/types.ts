@@ -51,4 +51,10 @@ export interface ScfSpeciesEstimates {
   deltaEv: number | null
   /** −ε of the outermost occupied orbital in eV; null when the solve did not converge */
   eigenvalueEv: number | null
+  /**
+   * Further SCF methods' ionisation energies by method id (e.g. the relativistic solver's), eV;
+   * null when that solve did not converge. describeSpecies reads every METHODS entry with
+   * `scf: true` from here (scf-delta and scf-eigenvalue from the two fields above).
+   */
+  byMethod?: Readonly<Partial<Record<string, number | null>>>
 }

@@ -28,6 +28,7 @@ describe('constants', () => {
       'dirac-hydrogen-like',
       'scf-delta',
       'scf-eigenvalue',
+      'dirac-qed-hydrogen-like',
     ])
     for (const m of METHODS) {
       expect(m.description.length).toBeGreaterThan(20)
