@@ -19,8 +19,8 @@ export type { GroundTerm, OrbitalBox, SubshellBoxes } from './terms'
 export { groundTerm, orbitalBoxes, unpairedElectrons } from './terms'
 export type { ScreeningRow } from './slater'
 export { slaterScreening, screeningConstant, nStar } from './slater'
-export type { MethodInfo, MethodName, NuclearMass } from './methods'
-export { METHODS, METHOD_NAMES, CODATA_2018, SLATER_RYDBERG_EV, diracHydrogenLikeEv, nuclearMass } from './methods'
+export type { MethodInfo, MethodName, MethodDomain, NuclearMass } from './methods'
+export { METHODS, METHOD_NAMES, methodDomainReason, CODATA_2018, SLATER_RYDBERG_EV, diracHydrogenLikeEv, nuclearMass } from './methods'
 export type { SourcedValue, ElectronAffinity, ReferenceGroundLevel } from './reference'
 export {
   IONISATION_SOURCE,
@@ -32,4 +32,7 @@ export {
 export type { DescribeOptions, Estimate, ScreeningEntry, SpeciesRecord, TermSummary } from './record'
 export type { ScfSpeciesEstimates } from './scf/types'
 export { describeSpecies } from './record'
+export type { BestEstimate, SpeciesClass } from './best-estimate'
+export { bestEstimate, speciesClass } from './best-estimate'
+export type { QedCorrection } from './qed/index'
 export { formatRecord } from './record-text'

@@ -40,6 +40,11 @@ export function formatRecord(r: SpeciesRecord): string {
     lines.push(...table([head, ...rows], '    '))
   }
   const ie = r.ionisationEnergy
+  if (r.electrons === 0) lines.push('  ionisation energy     none: no electron to remove')
+  if (r.bestEstimate) {
+    const b = r.bestEstimate
+    lines.push(`  best estimate         ${eV(b.eV)} eV (${b.method}), typically ±${b.typicalPercent} % for ${b.classLabel}`)
+  }
   if (r.electrons > 0) {
     lines.push(`  ionisation energy (next electron from ${ie.nextElectron})`)
     const rows: string[][] = []

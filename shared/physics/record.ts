@@ -5,6 +5,7 @@
  * copy before changing one.
  */
 import type { ScfOrbital, ScfRadialDensity, ScfSpeciesEstimates } from './scf/types'
+import { type BestEstimate, bestEstimate } from './best-estimate'
 import type { ConfigurationRule } from './configuration'
 import { CODATA_2018, METHODS, METHOD_NAMES, type MethodName, diracHydrogenLikeEv, nuclearMass } from './methods'
 import { oneElectronEnergy } from './qed/index'
@@ -76,6 +77,12 @@ export interface SpeciesRecord {
   /** the SCF solution of this species, when the caller supplied one */
   scf?: ScfSummary
   caution: string
+  /**
+   * The estimate to lead with: of the methods with a number here, the one with the smallest
+   * measured mean deviation for this class of species, with that mean (best-estimate.ts); null
+   * when no method with a number has a measured figure (a bare nucleus, most negative ions).
+   */
+  bestEstimate: BestEstimate | null
 }
 
 const ALL_METHODS: ReadonlySet<MethodName> = new Set(METHOD_NAMES)
@@ -165,6 +172,7 @@ export function describeSpecies(input: string | ParsedSpecies, options: Describe
     orbitals: base.orbitals,
     terms: base.terms,
     caution: base.caution,
+    bestEstimate: bestEstimate(z, charge, estimates),
   }
   if (base.referenceGroundLevel) record.referenceGroundLevel = base.referenceGroundLevel
   if (base.electronAffinity) record.electronAffinity = base.electronAffinity
