@@ -5,38 +5,56 @@
  */
 export const CLASS_FIGURES: Readonly<Record<string, readonly (readonly [string, number, number])[]>> = {
   'light-neutral': [
+    ['scf-eigenvalue', 3.25, 17],
+    ['scf-delta', 3.43, 17],
     ['slater-total-energy', 23.8, 17],
     ['slater-hydrogenic', 224, 17],
   ],
   'light-low': [
+    ['scf-eigenvalue', 1.22, 58],
+    ['scf-delta', 1.31, 58],
     ['slater-total-energy', 5.19, 58],
     ['slater-hydrogenic', 65.9, 58],
   ],
   'light-high': [
+    ['scf-eigenvalue', 0.458, 78],
+    ['scf-delta', 0.592, 78],
     ['slater-total-energy', 2.03, 78],
     ['slater-hydrogenic', 19.7, 78],
   ],
   'medium-neutral': [
+    ['scf-delta', 3.94, 36],
+    ['scf-eigenvalue', 4.07, 36],
     ['slater-total-energy', 66.7, 35],
     ['slater-hydrogenic', 154, 36],
   ],
   'medium-low': [
+    ['scf-eigenvalue', 2.9, 144],
+    ['scf-delta', 2.94, 144],
     ['slater-total-energy', 28, 144],
     ['slater-hydrogenic', 68.9, 144],
   ],
   'medium-high': [
+    ['scf-eigenvalue', 1.12, 1098],
+    ['scf-delta', 1.13, 1098],
     ['slater-total-energy', 9.67, 1098],
     ['slater-hydrogenic', 12.6, 1098],
   ],
   'heavy-neutral': [
+    ['scf-delta', 11.7, 49],
+    ['scf-eigenvalue', 12.5, 49],
     ['slater-total-energy', 32.9, 43],
     ['slater-hydrogenic', 52.7, 49],
   ],
   'heavy-low': [
+    ['scf-eigenvalue', 14.1, 196],
+    ['scf-delta', 14.7, 196],
     ['slater-total-energy', 36.2, 194],
     ['slater-hydrogenic', 261, 196],
   ],
   'heavy-high': [
+    ['scf-eigenvalue', 3.9, 3574],
+    ['scf-delta', 4.39, 3574],
     ['slater-total-energy', 9.4, 3574],
     ['slater-hydrogenic', 18, 3574],
   ],
@@ -44,6 +62,8 @@ export const CLASS_FIGURES: Readonly<Record<string, readonly (readonly [string, 
     ['dirac-qed-hydrogen-like', 0.000996, 103],
     ['slater-hydrogenic', 0.0313, 2],
     ['slater-total-energy', 0.0313, 2],
+    ['scf-delta', 0.0313, 2],
+    ['scf-eigenvalue', 0.0313, 2],
     ['dirac-hydrogen-like', 0.15, 103],
   ],
   'negative': [
