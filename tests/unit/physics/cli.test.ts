@@ -41,6 +41,17 @@ describe('npm run species (scripts/species.ts as a child process)', () => {
     expect(stderr).toMatch(/unknown method 'guesswork'; known: slater-hydrogenic, slater-total-energy, dirac-hydrogen-like, scf-delta, scf-eigenvalue/)
   }, 60_000)
 
+  it('reads the isotope forms labs write, and gives n/a with the reason in the JSON (issue 11)', () => {
+    const { status, stdout } = run('--json', 'Ca-48 10+', 'Ca48 XI', 'U91+')
+    expect(status).toBe(0)
+    const [a, b, u] = stdout.trimEnd().split('\n').map((l) => JSON.parse(l))
+    for (const r of [a, b]) expect(r).toMatchObject({ z: 20, charge: 10, massNumber: 48 })
+    const byMethod = Object.fromEntries(u.ionisationEnergy.estimates.map((e: { method: string }) => [e.method, e]))
+    expect(byMethod['slater-hydrogenic']).toEqual({ method: 'slater-hydrogenic', eV: null, notApplicable: expect.stringMatching(/one-electron ion/) })
+    expect(byMethod['dirac-qed-hydrogen-like'].corrections).toHaveLength(3)
+    expect(u.bestEstimate.method).toBe('dirac-qed-hydrogen-like')
+  }, 60_000)
+
   it('prints readable text by default', () => {
     const { status, stdout } = run('Fe XIV')
     expect(status).toBe(0)
