@@ -24,7 +24,9 @@ export const SPECIES_VALIDITY_DAYS = 365
 export function speciesPayload(s: CertSpeciesInput, ctx: IssueContext) {
   const r = s.result.record
   const until = addDays(ctx.issuedAt, SPECIES_VALIDITY_DAYS)
-  const methods = s.result.methods.map((name) => {
+  // a certificate names the methods behind its numbers only
+  const produced = new Set(r.ionisationEnergy.estimates.flatMap((e) => (e.eV === null ? [] : [e.method as string])))
+  const methods = s.result.methods.filter((name) => produced.has(name)).map((name) => {
     const m = METHODS.find((x) => x.name === name)
     return { name, description: m?.description ?? '', citation: m?.citation ?? '' }
   })
