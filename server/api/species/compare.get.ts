@@ -1,3 +1,4 @@
+import { GUARDED_CSV } from '#shared/csv/safe'
 import { stringify } from 'csv-stringify/sync'
 import { CAN } from '#shared/auth/roles'
 import { COMPARE_LIMIT, CompareQuery } from '#shared/schemas/species'
@@ -63,6 +64,7 @@ export default defineEventHandler(async (event) => {
         r.productionThreshold ?? '',
       ]),
       {
+        ...GUARDED_CSV,
         header: true,
         columns: [
           'species', 'spectroscopic', 'z', 'charge', 'configuration', 'term', 'isoelectronic', 'reference_eV',
