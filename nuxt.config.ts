@@ -54,6 +54,17 @@ export default defineNuxtConfig({
     },
     // Take the client address from X-Forwarded-For: only behind a trusted load balancer.
     trustProxy: false,
+    // Requests per API token per minute, per app instance (NUXT_TOKEN_RATE_LIMIT).
+    tokenRateLimit: 600,
+    // Background jobs through pg-boss (server/utils/jobs.ts). `precompute`: which elements the app
+    // fills the SCF cache for when the engine version has no complete cache ('1-118', or 'off').
+    jobs: {
+      enabled: true,
+      precompute: '1-118',
+      precomputeBatch: 8,
+      noticesCron: '15 6 * * *',
+      pollSeconds: 2,
+    },
     // Empty means "decide from publicBaseUrl": Secure cookies whenever the site is served over https.
     cookieSecure: '',
     public: {
