@@ -74,9 +74,8 @@ export default defineNuxtConfig({
   },
   nitro: {
     experimental: { tasks: true },
-    // The daily notices (re-certification due, check-outs overdue, missed certificate notices),
-    // at 06:15 server time. Every instance runs it; the notices table lets each notice out once.
-    scheduledTasks: { '15 6 * * *': ['notices:daily'] },
+    // The daily notices are scheduled through the job queue (runtimeConfig.jobs.noticesCron,
+    // server/utils/jobs.ts), so one instance sends them; the task stays for POST /api/notices/run.
     serverAssets: [
       { baseName: 'pdf-inter', dir: fontFiles('inter'), pattern: 'inter-{latin,latin-ext,greek}-{400,600}-normal.woff' },
       { baseName: 'pdf-mono', dir: fontFiles('roboto-mono'), pattern: 'roboto-mono-{latin,latin-ext}-{400,700}-normal.woff' },

@@ -50,9 +50,9 @@ try {
     NUXT_TRUST_PROXY: 'true',
     // A low per-token limit, so tests/api/tokens.test.ts can reach it.
     NUXT_TOKEN_RATE_LIMIT: '60',
-    // No background precompute of the whole periodic table on the shared test server;
-    // tests/api/jobs.test.ts starts instances of its own that do it for a few elements.
-    NUXT_JOBS_PRECOMPUTE: 'off',
+    // No job workers on the shared test server (no precompute of the whole periodic table, no
+    // schedule): tests/api/jobs.test.ts starts two instances of its own that share the jobs.
+    NUXT_JOBS_ENABLED: 'false',
   }
   app = startChild(process.execPath, [path.join(ROOT, '.output', 'server', 'index.mjs')], { prefix: 'app', env: { ...process.env, ...appEnv } })
   await waitFor(async () => (await fetch(`${baseUrl}/api/health`)).ok, { timeoutMs: 60_000, what: 'the app server' })

@@ -35,7 +35,7 @@ export async function withStack<T>(work: (stack: Stack) => Promise<T>, prepare?:
     const base = `http://127.0.0.1:${ports.app}`
     app = startChild(process.execPath, [path.join(ROOT, '.output', 'server', 'index.mjs')], {
       prefix: 'app',
-      env: { ...process.env, ...services.env, NODE_ENV: 'production', HOST: '127.0.0.1', PORT: String(ports.app), NUXT_PUBLIC_BASE_URL: base },
+      env: { NUXT_JOBS_ENABLED: 'false', ...process.env, ...services.env, NODE_ENV: 'production', HOST: '127.0.0.1', PORT: String(ports.app), NUXT_PUBLIC_BASE_URL: base },
     })
     await waitFor(async () => (await fetch(`${base}/api/health`)).ok, { timeoutMs: 60_000, what: 'the app server' })
     const cookieOf: Stack['cookieOf'] = async (role) => {

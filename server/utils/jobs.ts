@@ -1,0 +1,82 @@
+import { createHash } from 'node:crypto'
+import { hostname } from 'node:os'
+import PgBoss from 'pg-boss'
+import { ENGINE_VERSION } from '#shared/physics'
+import { QUEUE } from '#shared/jobs'
+import { batches, parseZRange, wantedSpecies, type Species } from '#shared/precompute-plan'
+
+// Background work shared by every app instance through PostgreSQL (pg-boss 10). Each instance
+// starts pg-boss with `migrate: false` (the schema and queues are made by migrations, as the
+// owner), works every queue, and a job is fetched by exactly one instance (SKIP LOCKED).
+//   precompute       one job per batch of species of this engine version, enqueued at start-up
+//                    when the SCF cache is incomplete; retried on failure; cached species skipped
+//   notices-daily    the daily notices, on a cron schedule that pg-boss fires once per tick
+//   object-store-reconcile  created by migration; its worker waits for server/utils/reconcile.ts
+//                    (see DEVELOPERS.md, "Background jobs")
+
+let boss: PgBoss | null = null
+export const INSTANCE = `${hostname()}:${process.pid}:${process.env.PORT ?? ''}`
+
+function batchId(batch: Species[]): string {
+  const h = createHash('sha256').update(`precompute|${ENGINE_VERSION}|${batch.map((s) => `${s.z}:${s.charge}`).join(',')}`).digest('hex')
+  return `${h.slice(0, 8)}-${h.slice(8, 12)}-4${h.slice(13, 16)}-8${h.slice(17, 20)}-${h.slice(20, 32)}`
+}
+
+interface PrecomputeData {
+  engineVersion: string
+  species: Species[]
+}
+
+/** Solves the batch's species not yet cached; answers what this instance solved and skipped. */
+async function precomputeBatch(data: PrecomputeData): Promise<{ instance: string; solved: string[]; skipped: string[] }> {
+  if (data.engineVersion !== ENGINE_VERSION) return { instance: INSTANCE, solved: [], skipped: data.species.map((s) => `${s.z}:${s.charge}`) }
+  const done = await cachedScfKeys(useDb())
+  const solved: string[] = []
+  const skipped: string[] = []
+  await Promise.all(
+    data.species.map(async ({ z, charge }) => {
+      const key = `${z}:${charge}`
+      if (done.has(key)) return skipped.push(key)
+      await computeScf(z, charge)
+      solved.push(key)
+    }),
+  )
+  return { instance: INSTANCE, solved: solved.sort(), skipped: skipped.sort() }
+}
+
+/** Enqueues the batches that still have uncached species; the same batch is never queued twice. */
+export async function enqueuePrecompute(b: PgBoss, range: string, size: number): Promise<number> {
+  const z = parseZRange(range)
+  if (!z) return 0
+  const done = await cachedScfKeys(useDb())
+  const wanted = wantedSpecies(z.from, z.to)
+  if (wanted.every((s) => done.has(`${s.z}:${s.charge}`))) return 0
+  const jobs = batches(wanted, size)
+    .filter((batch) => batch.some((s) => !done.has(`${s.z}:${s.charge}`)))
+    .map((batch) => ({ id: batchId(batch), name: QUEUE.precompute, data: { engineVersion: ENGINE_VERSION, species: batch } satisfies PrecomputeData }))
+  await b.insert(jobs)
+  return jobs.length
+}
+
+/** Starts pg-boss and the workers (Nitro plugin). */
+export async function startJobs(): Promise<void> {
+  const config = useRuntimeConfig().jobs as { enabled: boolean | string; precompute: string; precomputeBatch: number | string; noticesCron: string; pollSeconds: number | string }
+  if (String(config.enabled) === 'false') return
+  const b = new PgBoss({ connectionString: String(useRuntimeConfig().databaseUrl), max: 3, migrate: false, application_name: 'ionfolio-jobs' })
+  b.on('error', (e) => console.error('Job queue:', e instanceof Error ? e.message : e))
+  await b.start()
+  boss = b
+  const poll = { pollingIntervalSeconds: Math.max(0.5, Number(config.pollSeconds) || 2), batchSize: 1 }
+  await b.work<PrecomputeData>(QUEUE.precompute, poll, async ([job]) => precomputeBatch(job!.data))
+  await b.work(QUEUE.notices, poll, async () => ({ instance: INSTANCE, ...(await runDailyNotices()) }))
+  await b.schedule(QUEUE.notices, String(config.noticesCron), null, { tz: 'UTC' })
+  const queued = await enqueuePrecompute(b, String(config.precompute), Math.max(1, Number(config.precomputeBatch) || 8))
+  if (queued) console.log(`${queued} precompute batch(es) of engine ${ENGINE_VERSION} wanted (each is queued once, whichever instance asks)`)
+}
+
+/** Stops taking jobs; a job under way is given a moment to finish, else it is retried elsewhere. */
+export async function stopJobs(): Promise<void> {
+  const b = boss
+  boss = null
+  await b?.stop({ graceful: true, timeout: 10_000, wait: true }).catch(() => {})
+}
