@@ -69,7 +69,7 @@ export async function startJobs(): Promise<void> {
   const poll = { pollingIntervalSeconds: Math.max(0.5, Number(config.pollSeconds) || 2), batchSize: 1 }
   await b.work<PrecomputeData>(QUEUE.precompute, poll, async ([job]) => precomputeBatch(job!.data))
   await b.work(QUEUE.notices, poll, async () => ({ instance: INSTANCE, ...(await runDailyNotices()) }))
-  await b.schedule(QUEUE.notices, String(config.noticesCron), null, { tz: 'UTC' })
+  await b.schedule(QUEUE.notices, String(config.noticesCron), {}, { tz: 'UTC' })
   const queued = await enqueuePrecompute(b, String(config.precompute), Math.max(1, Number(config.precomputeBatch) || 8))
   if (queued) console.log(`${queued} precompute batch(es) of engine ${ENGINE_VERSION} wanted (each is queued once, whichever instance asks)`)
 }

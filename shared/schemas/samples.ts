@@ -243,3 +243,6 @@ export const LocationBody = z.strictObject({
 export const ImportQuery = z.object({
   dryRun: z.enum(['true', 'false', '1', '0']).optional().transform((v) => v === 'true' || v === '1'),
 })
+
+/** DELETE /api/samples/:id?version=N (the optimistic lock, optional). */
+export const DeleteSampleQuery = z.object({ version: z.coerce.number().int().min(1).optional() })

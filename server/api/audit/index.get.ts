@@ -1,17 +1,7 @@
-import { z } from 'zod'
 import { stringify } from 'csv-stringify/sync'
 import { CAN } from '#shared/auth/roles'
-import { ListQuery } from '#shared/schemas/common'
+import { AuditQuery as Query } from '#shared/schemas/audit'
 
-const Query = ListQuery.extend({
-  action: z.string().max(60).optional(),
-  entityType: z.string().max(40).optional(),
-  entityId: z.string().max(100).optional(),
-  actor: z.string().max(254).optional(),
-  from: z.iso.date().optional(),
-  to: z.iso.date().optional(),
-  format: z.enum(['json', 'csv']).default('json'),
-})
 
 const CSV_LIMIT = 100_000
 

@@ -7,7 +7,24 @@ import { parseZRange, wantedSpecies } from '#shared/precompute-plan'
 // The background jobs at a glance, for lab managers: per queue, how many are waiting, running,
 // done and failed; the latest failures with their error; and how far the SCF precompute of this
 // engine version has come. Read straight from pg-boss's tables, so any instance answers the same.
-export default defineEventHandler(async (event) => {
+type Counts = Record<(typeof JOB_STATES)[number], number>
+interface QueueView {
+  name: string
+  counts: Counts
+  schedule: { name: string; cron: string; timezone: string | null } | null
+  worked: boolean
+}
+interface Failure {
+  id: string
+  queue: string
+  state: string
+  retries: number
+  at: string | null
+  error: string | null
+  species?: string[]
+}
+
+export default defineEventHandler(async (event): Promise<{ queues: QueueView[]; failures: Failure[]; precompute: { engineVersion: string; range: string; wanted: number; cached: number } }> => {
   requireRole(event, ...CAN.viewJobs)
   const db = useDb()
   const counts = await db.raw(`select name, state::text as state, count(*)::int as n from pgboss.job group by 1, 2`)
@@ -21,7 +38,7 @@ export default defineEventHandler(async (event) => {
   return {
     queues: JOB_QUEUES.map((q) => ({
       name: q.name,
-      counts: Object.fromEntries(JOB_STATES.map((s) => [s, counts.rows.find((r: { name: string; state: string }) => r.name === q.name && r.state === s)?.n ?? 0])),
+      counts: Object.fromEntries(JOB_STATES.map((s) => [s, counts.rows.find((r: { name: string; state: string }) => r.name === q.name && r.state === s)?.n ?? 0])) as Counts,
       schedule: schedules.rows.find((s: { name: string }) => s.name === q.name) ?? null,
       worked: q.name !== QUEUE.reconcile,
     })),

@@ -1,8 +1,7 @@
-import { z } from 'zod'
+import { DeleteSampleQuery as Query } from '#shared/schemas/samples'
 import { CAN } from '#shared/auth/roles'
 import { IdParam } from '#shared/schemas/common'
 
-const Query = z.object({ version: z.coerce.number().int().min(1).optional() })
 
 // Retiring is the only way a sample leaves the stock. A sample is never deleted: once there are
 // certificates and custody history they point at it, and even now its audit trail does. Until

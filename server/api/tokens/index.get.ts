@@ -1,10 +1,25 @@
 import { CAN, can } from '#shared/auth/roles'
 
+interface Listed {
+  id: string
+  name: string
+  scope: 'read' | 'read-write'
+  prefix: string
+  expires_on: string
+  created_at: Date
+  last_used_at: Date | null
+  last_used_address: string | null
+  revoked_at: Date | null
+  owner_id: string
+  owner_name: string
+  owner_email: string
+}
+
 // Your own tokens; a lab manager sees every person's, with the owner named. Never the secret.
 export default defineEventHandler(async (event) => {
   const me = requireRole(event, ...CAN.useTokens)
   const all = can(me.role, 'manageAllTokens')
-  const rows = await useDb()('api_tokens as t')
+  const rows: Listed[] = await useDb()('api_tokens as t')
     .join('users as u', 'u.id', 't.user_id')
     .modify((q) => {
       if (!all) q.where('t.user_id', me.id)
