@@ -15,6 +15,8 @@ export interface Stack {
   base: string
   /** a Knex pool on the bench database */
   db: Knex
+  /** the NUXT_* settings that point an app server at this stack's services */
+  env: Record<string, string>
   /** the session cookie of the demo person of `role` */
   cookieOf: (role: (typeof DEMO_PEOPLE)[number]['role']) => Promise<string>
 }
@@ -44,7 +46,7 @@ export async function withStack<T>(work: (stack: Stack) => Promise<T>, prepare?:
       if (!r.ok) throw new Error(`could not sign in as ${role}: ${r.status}`)
       return r.headers.getSetCookie().map((c) => c.split(';')[0]).join('; ')
     }
-    return await work({ base, db, cookieOf })
+    return await work({ base, db, cookieOf, env: services.env })
   } finally {
     await db.destroy()
     if (app && app.exitCode === null) {

@@ -1,0 +1,56 @@
+// `npm run bench:precompute [-- --z 1-18]`: the SCF precompute through the job queue, on one app
+// instance and then on two against the same database, in the same run. Each run starts from an
+// empty cache for the range and times from the first batch queued to the last one done (pg-boss's
+// own timestamps). Target: two instances take at most 0.6× the time of one.
+import { ENGINE_VERSION } from '../shared/physics'
+import { parseZRange, wantedSpecies } from '../shared/precompute-plan'
+import { startInstances } from '../tests/support/instances'
+import { runBench, withStack, type Stack } from './lib/stack'
+
+const zArg = process.argv.indexOf('--z')
+const RANGE = zArg >= 0 ? process.argv[zArg + 1]! : '1-18'
+const TARGET = 0.6
+
+async function timed(stack: Stack, instances: number): Promise<{ seconds: number; byInstance: Record<string, number> }> {
+  const z = parseZRange(RANGE)!
+  await stack.db('species_scf_cache').whereBetween('z', [z.from, z.to]).andWhere({ engine_version: ENGINE_VERSION }).delete()
+  await stack.db.raw(`delete from pgboss.job where name = 'precompute'`)
+  const started = await startInstances(instances, { ...stack.env, NUXT_JOBS_ENABLED: 'true', NUXT_JOBS_PRECOMPUTE: RANGE, NUXT_JOBS_PRECOMPUTE_BATCH: '4', NUXT_JOBS_POLL_SECONDS: '0.5', NUXT_JOBS_NOTICES_CRON: '15 6 * * *' })
+  try {
+    for (;;) {
+      const r = await stack.db.raw(`select count(*) filter (where state = 'completed')::int as done, count(*)::int as total from pgboss.job where name = 'precompute'`)
+      const { done, total } = r.rows[0]
+      if (total > 0 && done === total) break
+      const failed = await stack.db.raw(`select count(*)::int as n from pgboss.job where name = 'precompute' and state = 'failed'`)
+      if (failed.rows[0].n) throw new Error('a precompute batch failed: see /jobs')
+      await new Promise((res) => setTimeout(res, 500))
+    }
+    const span = await stack.db.raw(`select extract(epoch from max(completed_on) - min(created_on))::float as s from pgboss.job where name = 'precompute'`)
+    const outputs = await stack.db.raw(`select output from pgboss.job where name = 'precompute'`)
+    const byInstance: Record<string, number> = {}
+    for (const { output } of outputs.rows) byInstance[output.instance] = (byInstance[output.instance] ?? 0) + output.solved.length
+    return { seconds: span.rows[0].s, byInstance }
+  } finally {
+    await started.stop()
+  }
+}
+
+async function main(): Promise<number> {
+  return withStack(async (stack) => {
+    const z = parseZRange(RANGE)!
+    const species = wantedSpecies(z.from, z.to).length
+    const one = await timed(stack, 1)
+    const two = await timed(stack, 2)
+    const ratio = two.seconds / one.seconds
+    const ok = ratio <= TARGET
+    console.log(`
+SCF precompute through the job queue, elements ${RANGE} (${species} species with a NIST reference), batches of 4
+  one instance    ${one.seconds.toFixed(1)} s   solved per instance: ${Object.values(one.byInstance).join(', ')}
+  two instances   ${two.seconds.toFixed(1)} s   solved per instance: ${Object.values(two.byInstance).join(', ')}
+  ratio two / one ${ratio.toFixed(2)}
+  target: ratio <= ${TARGET}   ${ok ? 'PASS' : 'FAIL'}`)
+    return ok ? 0 : 1
+  })
+}
+
+runBench(main)
