@@ -1,9 +1,7 @@
-import { createHash } from 'node:crypto'
 import { hostname } from 'node:os'
 import PgBoss from 'pg-boss'
 import { ENGINE_VERSION } from '#shared/physics'
 import { QUEUE } from '#shared/jobs'
-import { batches, parseZRange, wantedSpecies, type Species } from '#shared/precompute-plan'
 
 // Background work shared by every app instance through PostgreSQL (pg-boss 10). Each instance
 // starts pg-boss with `migrate: false` (the schema and queues are made by migrations, as the
@@ -16,16 +14,6 @@ import { batches, parseZRange, wantedSpecies, type Species } from '#shared/preco
 
 let boss: PgBoss | null = null
 export const INSTANCE = `${hostname()}:${process.pid}:${process.env.PORT ?? ''}`
-
-function batchId(batch: Species[]): string {
-  const h = createHash('sha256').update(`precompute|${ENGINE_VERSION}|${batch.map((s) => `${s.z}:${s.charge}`).join(',')}`).digest('hex')
-  return `${h.slice(0, 8)}-${h.slice(8, 12)}-4${h.slice(13, 16)}-8${h.slice(17, 20)}-${h.slice(20, 32)}`
-}
-
-interface PrecomputeData {
-  engineVersion: string
-  species: Species[]
-}
 
 /** Solves the batch's species not yet cached; answers what this instance solved and skipped. */
 async function precomputeBatch(data: PrecomputeData): Promise<{ instance: string; solved: string[]; skipped: string[] }> {
@@ -46,15 +34,8 @@ async function precomputeBatch(data: PrecomputeData): Promise<{ instance: string
 
 /** Enqueues the batches that still have uncached species; the same batch is never queued twice. */
 export async function enqueuePrecompute(b: PgBoss, range: string, size: number): Promise<number> {
-  const z = parseZRange(range)
-  if (!z) return 0
-  const done = await cachedScfKeys(useDb())
-  const wanted = wantedSpecies(z.from, z.to)
-  if (wanted.every((s) => done.has(`${s.z}:${s.charge}`))) return 0
-  const jobs = batches(wanted, size)
-    .filter((batch) => batch.some((s) => !done.has(`${s.z}:${s.charge}`)))
-    .map((batch) => ({ id: batchId(batch), name: QUEUE.precompute, data: { engineVersion: ENGINE_VERSION, species: batch } satisfies PrecomputeData }))
-  await b.insert(jobs)
+  const jobs = precomputeJobs(await cachedScfKeys(useDb()), range, size)
+  if (jobs.length) await b.insert(jobs)
   return jobs.length
 }
 

@@ -5,7 +5,7 @@ import { allMail } from '../support/mail'
 import { createSample } from '../support/samples'
 import { dayFromNow } from '../support/certificates'
 import { startInstances, type Instances } from '../support/instances'
-import { wantedSpecies } from '../../shared/precompute-plan'
+import { batches, wantedSpecies } from '../../shared/precompute-plan'
 import { ENGINE_VERSION } from '../../shared/physics'
 
 // Two more app instances against the one test database share the background work: the
@@ -61,6 +61,8 @@ describe('background jobs shared by two instances', () => {
     )
     const solved: string[] = jobs.flatMap((j: any) => j.output.solved)
     const wanted = wantedSpecies(RANGE.from, RANGE.to).map((s) => `${s.z}:${s.charge}`)
+    // Both instances asked for every batch at start-up; each batch was queued once.
+    expect(jobs.length).toBe(batches(wantedSpecies(RANGE.from, RANGE.to), 3).length)
     expect(solved.length).toBe(wanted.length)
     expect(new Set(solved).size).toBe(solved.length)
     expect([...solved].sort()).toEqual([...wanted].sort())
