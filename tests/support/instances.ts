@@ -13,7 +13,7 @@ export interface Instances {
  * Starts `count` more app servers (the built .output) on free ports against the same test
  * database, object store and mail spool as the test server, with `env` added.
  */
-export async function startInstances(count: number, env: Record<string, string>): Promise<Instances> {
+export async function startInstances(count: number, env: Record<string, string>, options: { ownSession?: boolean } = {}): Promise<Instances> {
   const children: Array<ReturnType<typeof startChild>> = []
   const bases: string[] = []
   const stop = async () => {
@@ -31,7 +31,10 @@ export async function startInstances(count: number, env: Record<string, string>)
       const port = await freePort()
       const base = `http://127.0.0.1:${port}`
       children.push(
-        startChild(process.execPath, [path.join(ROOT, '.output', 'server', 'index.mjs')], {
+        // ownSession: each server in a session of its own (setsid), so with the kernel's autogroup
+        // scheduling it gets its own share of the CPU, as a server on its own host would, instead of
+        // splitting the share of the session that started it.
+        startChild(options.ownSession ? 'setsid' : process.execPath, [...(options.ownSession ? [process.execPath] : []), path.join(ROOT, '.output', 'server', 'index.mjs')], {
           prefix: `instance-${i + 1}`,
           env: { ...process.env, NODE_ENV: 'production', HOST: '127.0.0.1', PORT: String(port), NUXT_PUBLIC_BASE_URL: base, ...env },
         }),
