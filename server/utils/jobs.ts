@@ -9,8 +9,8 @@ import { QUEUE } from '#shared/jobs'
 //   precompute       one job per batch of species of this engine version, enqueued at start-up
 //                    when the SCF cache is incomplete; retried on failure; cached species skipped
 //   notices-daily    the daily notices, on a cron schedule that pg-boss fires once per tick
-//   object-store-reconcile  created by migration; its worker waits for server/utils/reconcile.ts
-//                    (see DEVELOPERS.md, "Background jobs")
+//   object-store-reconcile  the store reconciliation (the storage:reconcile task: it only reports),
+//                    on its own schedule, once per tick
 
 let boss: PgBoss | null = null
 export const INSTANCE = `${hostname()}:${process.pid}:${process.env.PORT ?? ''}`
@@ -41,7 +41,7 @@ export async function enqueuePrecompute(b: PgBoss, range: string, size: number):
 
 /** Starts pg-boss and the workers (Nitro plugin). */
 export async function startJobs(): Promise<void> {
-  const config = useRuntimeConfig().jobs as { enabled: boolean | string; precompute: string; precomputeBatch: number | string; noticesCron: string; pollSeconds: number | string }
+  const config = useRuntimeConfig().jobs as { enabled: boolean | string; precompute: string; precomputeBatch: number | string; noticesCron: string; reconcileCron: string; pollSeconds: number | string }
   if (String(config.enabled) === 'false') return
   const b = new PgBoss({ connectionString: String(useRuntimeConfig().databaseUrl), max: 3, migrate: false, application_name: 'ionfolio-jobs' })
   b.on('error', (e) => console.error('Job queue:', e instanceof Error ? e.message : e))
@@ -51,6 +51,9 @@ export async function startJobs(): Promise<void> {
   await b.work<PrecomputeData>(QUEUE.precompute, poll, async ([job]) => precomputeBatch(job!.data))
   await b.work(QUEUE.notices, poll, async () => ({ instance: INSTANCE, ...(await runDailyNotices()) }))
   await b.schedule(QUEUE.notices, String(config.noticesCron), {}, { tz: 'UTC' })
+  await b.work(QUEUE.reconcile, poll, async () => ({ instance: INSTANCE, ...((await runTask('storage:reconcile')).result as object) }))
+  if (String(config.reconcileCron) === 'off') await b.unschedule(QUEUE.reconcile)
+  else await b.schedule(QUEUE.reconcile, String(config.reconcileCron), {}, { tz: 'UTC' })
   const queued = await enqueuePrecompute(b, String(config.precompute), Math.max(1, Number(config.precomputeBatch) || 8))
   if (queued) console.log(`${queued} precompute batch(es) of engine ${ENGINE_VERSION} wanted (each is queued once, whichever instance asks)`)
 }

@@ -40,7 +40,7 @@ export default defineEventHandler(async (event): Promise<{ queues: QueueView[]; 
       name: q.name,
       counts: Object.fromEntries(JOB_STATES.map((s) => [s, counts.rows.find((r: { name: string; state: string }) => r.name === q.name && r.state === s)?.n ?? 0])) as Counts,
       schedule: schedules.rows.find((s: { name: string }) => s.name === q.name) ?? null,
-      worked: q.name !== QUEUE.reconcile,
+      worked: true,
     })),
     failures: failures.rows.map((f: any) => ({
       id: f.id,

@@ -16,7 +16,7 @@ export default defineEventHandler(async (event) => {
   try {
     const datasheetId = randomUUID()
     const key = `datasheets/${id}/${datasheetId}`
-    await storeUpload(file, key)
+    await storeUpload(event, file, key)
     try {
       const row = await db.transaction(async (trx) => {
         const [row] = await trx('datasheets')
