@@ -80,6 +80,8 @@ export default defineNuxtConfig({
     public: {
       baseUrl: 'http://localhost:3300',
       labName: 'Larchmere Ion Beam Laboratory',
+      // IANA zone every date and time is written in (ISO 8601 date, 24-hour time, zone named).
+      labTimeZone: 'UTC',
     },
   },
   nitro: {

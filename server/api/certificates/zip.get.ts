@@ -1,3 +1,4 @@
+import { GUARDED_CSV } from '#shared/csv/safe'
 import { once } from 'node:events'
 import { ZipArchive } from 'archiver'
 import { stringify } from 'csv-stringify/sync'
@@ -40,7 +41,7 @@ export default defineEventHandler(async (event) => {
     }
     const manifest = stringify(
       rows.map((r) => [r.number, r.version, r.status, r.subject_type, r.subject_label, new Date(r.issued_at).toISOString(), r.issuer_name ?? '', r.sha256, r.pdf_sha256, `${r.number}-v${r.version}.pdf`]),
-      { header: true, columns: ['number', 'version', 'status', 'subject_type', 'subject', 'issued_at', 'issued_by', 'content_sha256', 'pdf_sha256', 'file'] },
+      { ...GUARDED_CSV, header: true, columns: ['number', 'version', 'status', 'subject_type', 'subject', 'issued_at', 'issued_by', 'content_sha256', 'pdf_sha256', 'file'] },
     )
     archive.append(manifest, { name: 'manifest.csv' })
     await archive.finalize()
