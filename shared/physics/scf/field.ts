@@ -23,8 +23,18 @@ export interface Field {
   build(x: Float64Array): { hartree: number; xc: number; sic: number }
 }
 
-/** A field builder for these channels on this grid, with its scratch arrays. */
-export function createField(z: number, grid: RadialGrid, channels: Channel[], functional: ScfFunctional): Field {
+/**
+ * A field builder for these channels on this grid, with its scratch arrays; nuclear is the
+ * potential of the nucleus (default the point charge −Z/r; the relativistic solver passes a
+ * finite one).
+ */
+export function createField(
+  z: number,
+  grid: RadialGrid,
+  channels: Channel[],
+  functional: ScfFunctional,
+  nuclear?: Float64Array,
+): Field {
   const size = grid.size
   const count = channels.length
   const hws = hartreeWorkspace(grid)
@@ -61,7 +71,8 @@ export function createField(z: number, grid: RadialGrid, channels: Channel[], fu
       const ch = channels[c]
       const v = potentials[c]
       const vxc = ch.spin === 'down' ? vxcDown : vxcUp
-      for (let i = 0; i < size; i++) v[i] = -z / grid.r[i] + vH[i] + vxc[i]
+      if (nuclear) for (let i = 0; i < size; i++) v[i] = nuclear[i] + vH[i] + vxc[i]
+      else for (let i = 0; i < size; i++) v[i] = -z / grid.r[i] + vH[i] + vxc[i]
       if (functional === 'lsd-sic') {
         eSic += selfInteraction(grid, x.subarray(c * size, (c + 1) * size), ch.perSpin, ch.spins, vSic, sws, hws)
         for (let i = 0; i < size; i++) v[i] -= vSic[i]
