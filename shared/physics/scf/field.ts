@@ -8,6 +8,7 @@ import type { ScfFunctional } from './options'
 import { hartree, hartreeWorkspace } from './potential'
 import { selfInteraction, sicWorkspace } from './sic'
 import { lsdOnGrid } from './xc'
+import { addRelativisticExchange } from './xc-relativistic'
 
 /** One solved channel: its eigenvalue and radial function P (∫P² dr = 1). */
 export interface ChannelSolution {
@@ -26,7 +27,7 @@ export interface Field {
 /**
  * A field builder for these channels on this grid, with its scratch arrays; nuclear is the
  * potential of the nucleus (default the point charge −Z/r; the relativistic solver passes a
- * finite one).
+ * finite one), relativisticExchange adds the correction of xc-relativistic.ts.
  */
 export function createField(
   z: number,
@@ -34,6 +35,7 @@ export function createField(
   channels: Channel[],
   functional: ScfFunctional,
   nuclear?: Float64Array,
+  relativisticExchange = false,
 ): Field {
   const size = grid.size
   const count = channels.length
@@ -65,7 +67,8 @@ export function createField(
     }
     for (let i = 0; i < size; i++) total[i] = pUp[i] + pDown[i]
     const eH = hartree(grid, total, vH, hws)
-    const eXc = lsdOnGrid(grid.r, grid.dr, pUp, pDown, vxcUp, vxcDown)
+    let eXc = lsdOnGrid(grid.r, grid.dr, pUp, pDown, vxcUp, vxcDown)
+    if (relativisticExchange) eXc += addRelativisticExchange(grid.r, grid.dr, pUp, pDown, vxcUp, vxcDown)
     let eSic = 0
     for (let c = 0; c < count; c++) {
       const ch = channels[c]
@@ -74,7 +77,7 @@ export function createField(
       if (nuclear) for (let i = 0; i < size; i++) v[i] = nuclear[i] + vH[i] + vxc[i]
       else for (let i = 0; i < size; i++) v[i] = -z / grid.r[i] + vH[i] + vxc[i]
       if (functional === 'lsd-sic') {
-        eSic += selfInteraction(grid, x.subarray(c * size, (c + 1) * size), ch.perSpin, ch.spins, vSic, sws, hws)
+        eSic += selfInteraction(grid, x.subarray(c * size, (c + 1) * size), ch.perSpin, ch.spins, vSic, sws, hws, relativisticExchange)
         for (let i = 0; i < size; i++) v[i] -= vSic[i]
       }
     }
