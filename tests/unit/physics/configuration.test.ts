@@ -203,8 +203,7 @@ describe('every species', () => {
         expect(g.text.split(' ').filter(Boolean).length).toBe(g.subshells.length)
       }
     }
-    // ~150,000 assertions: on a loaded 2-core machine beside the solver tests this takes over 5 s
-  }, 30_000)
+  })
 
   it('gives a bare nucleus an empty configuration and core', () => {
     const g = groundConfiguration(26, 26)
