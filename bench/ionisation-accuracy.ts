@@ -45,6 +45,7 @@ export const GROUPS: readonly Group[] = [
   { label: 'singly charged (q = 1)', test: (_, q) => q === 1 },
   { label: 'q = 2–4', test: (_, q) => q >= 2 && q <= 4 },
   { label: 'highly charged (q ≥ 5)', test: (_, q) => q >= 5 },
+  { label: 'heavy highly charged (Z ≥ 36, q ≥ 5)', test: (z, q) => z >= 36 && q >= 5 },
   { label: 'one-electron ions', test: (z, q) => q === z - 1 },
   { label: 'negative ions (EA)', test: (_, q) => q === -1 },
 ]
@@ -200,7 +201,7 @@ export function runAccuracyBench(out: (line: string) => void = (l) => process.st
 
 /**
  * Solves every species with a reference value in worker threads (about a minute on two cores)
- * and adds the scf-delta and scf-eigenvalue rows.
+ * and adds the scf-delta, scf-eigenvalue, dirac-scf-delta and dirac-scf-eigenvalue rows.
  */
 async function addScfProviders(workers: number): Promise<void> {
   const { Piscina } = await import('piscina')

@@ -12,7 +12,7 @@ export type MethodName =
   | 'dirac-qed-hydrogen-like'
   | 'scf-delta'
   | 'scf-eigenvalue'
-  // the relativistic solver's methods (shared/physics/scf, Dirac–Kohn–Sham), once in METHODS
+  // the relativistic solver's methods (shared/physics/scf, Dirac–Kohn–Sham)
   | 'dirac-scf-delta'
   | 'dirac-scf-eigenvalue'
 
@@ -110,6 +110,20 @@ export const METHODS: readonly MethodInfo[] = [
       'V. M. Shabaev, J. Phys. B 26, 1103 (1993); V. M. Shabaev, I. I. Tupitsyn and V. A. Yerokhin, Phys. Rev. A 88, 012513 (2013); P. J. Mohr, Phys. Rev. A 46, 4421 (1992); E. A. Uehling, Phys. Rev. 48, 55 (1935)',
     scf: false,
     domain: { text: 'one-electron ions, 1s electron, Z = 1–118 (self-energy table to Z = 120)', oneElectron: 'only', anions: false, zMax: 118 },
+  },
+  {
+    name: 'dirac-scf-delta',
+    description: 'Total-energy difference (ΔSCF) of relativistic Dirac–Kohn–Sham central-field solutions of the next ion and the species: large and small components of every nlj subshell, spin-polarised local density with the self-interaction correction, finite nucleus',
+    citation: 'D. A. Liberman, D. T. Cromer and J. T. Waber, Comput. Phys. Commun. 2, 107 (1971); J. P. Perdew and A. Zunger, Phys. Rev. B 23, 5048 (1981); nuclear radii W. R. Johnson and G. Soff, At. Data Nucl. Data Tables 33, 405 (1985)',
+    scf: true,
+    domain: { text: 'atoms and positive ions, Z = 1–118, every charge state; relativistic, finite nucleus, no QED', oneElectron: 'any', anions: false, zMax: 118 },
+  },
+  {
+    name: 'dirac-scf-eigenvalue',
+    description: 'Minus the highest occupied nlj eigenvalue of the same self-interaction-corrected Dirac–Kohn–Sham solution',
+    citation: 'D. A. Liberman, D. T. Cromer and J. T. Waber, Comput. Phys. Commun. 2, 107 (1971); J. P. Perdew and A. Zunger, Phys. Rev. B 23, 5048 (1981)',
+    scf: true,
+    domain: { text: 'atoms and positive ions, Z = 1–118, every charge state; relativistic, finite nucleus, no QED', oneElectron: 'any', anions: false, zMax: 118 },
   },
 ]
 

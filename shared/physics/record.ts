@@ -4,8 +4,9 @@
  * Nested objects are frozen and shared between records of the same species (record-parts.ts);
  * copy before changing one.
  */
-import type { ScfOrbital, ScfRadialDensity, ScfSpeciesEstimates } from './scf/types'
 import { type BestEstimate, bestEstimate } from './best-estimate'
+import { bindingEnergies, type BindingEnergy } from './binding'
+import type { DiracOrbital, DiracRadialDensity, ScfOrbital, ScfRadialDensity, ScfSpeciesEstimates } from './scf/types'
 import type { ConfigurationRule } from './configuration'
 import { CODATA_2018, METHODS, METHOD_NAMES, type MethodName, diracHydrogenLikeEv, nuclearMass } from './methods'
 import { oneElectronEnergy } from './qed/index'
@@ -18,6 +19,7 @@ import type { SubshellBoxes } from './terms'
 import { ENGINE_VERSION } from './version'
 
 export type { Estimate, TermSummary } from './record-parts'
+export type { BindingEnergy } from './binding'
 
 export interface DescribeOptions {
   /** methods to run (default: every applicable one); unknown names throw */
@@ -34,6 +36,17 @@ export interface ScfSummary {
   totalEnergyHartree: number | null
   orbitals: readonly ScfOrbital[]
   density: ScfRadialDensity | null
+}
+
+/** What the record carries of the relativistic solution: nlj orbitals and large/small densities. */
+export interface DiracSummary {
+  method: string
+  converged: boolean
+  iterations: number
+  totalEnergyHartree: number | null
+  nucleusRadiusFm: number
+  orbitals: readonly DiracOrbital[]
+  density: DiracRadialDensity | null
 }
 
 export type ScreeningEntry = Readonly<ScreeningRow> & { readonly zEffMeanRadius?: number }
@@ -76,6 +89,10 @@ export interface SpeciesRecord {
   productionThresholdNote?: string
   /** the SCF solution of this species, when the caller supplied one */
   scf?: ScfSummary
+  /** binding energy of every occupied nlj subshell (binding.ts); empty without a relativistic solution */
+  bindingEnergies: readonly BindingEnergy[]
+  /** the relativistic SCF solution of this species, when the caller supplied one */
+  dirac?: DiracSummary
   caution: string
   /**
    * The estimate to lead with: of the methods with a number here, the one with the smallest
@@ -132,12 +149,22 @@ export function describeSpecies(input: string | ParsedSpecies, options: Describe
   if (scf) {
     for (const note of [failure('this species', scf.species), failure('the next ion', scf.next)]) if (note) notes.push(note)
     const missing = 'no converged self-consistent solution for this species and the next ion'
+    const dirac = scf.dirac
     for (const info of METHODS) {
       if (!info.scf || !asked(info.name)) continue
-      const value = info.name === 'scf-delta' ? scf.deltaEv : info.name === 'scf-eigenvalue' ? scf.eigenvalueEv : scf.byMethod?.[info.name]
+      const relativistic = info.name === 'dirac-scf-delta' || info.name === 'dirac-scf-eigenvalue'
+      const value =
+        info.name === 'scf-delta' ? scf.deltaEv
+        : info.name === 'scf-eigenvalue' ? scf.eigenvalueEv
+        : relativistic ? (dirac ? (info.name === 'dirac-scf-delta' ? dirac.deltaEv : dirac.eigenvalueEv) : undefined)
+        : scf.byMethod?.[info.name]
       // a method the caller's SCF results do not cover is left out (not computed), not "not applicable"
       if (value === undefined) continue
-      estimates.push(judged(info.name, species, value, referenceEv, { basis: scf.species.method, missing }))
+      const basis = relativistic && dirac ? dirac.species.method : scf.species.method
+      estimates.push(judged(info.name, species, value, referenceEv, { basis, missing }))
+    }
+    if (dirac) {
+      for (const note of [failure('this species (relativistic)', dirac.species), failure('the next ion (relativistic)', dirac.next)]) if (note) notes.push(note)
     }
     if (scf.species.converged) {
       screening = base.screening.map((row) => {
@@ -171,6 +198,7 @@ export function describeSpecies(input: string | ParsedSpecies, options: Describe
     unpaired: base.unpaired,
     orbitals: base.orbitals,
     terms: base.terms,
+    bindingEnergies: bindingEnergies(scf?.dirac, referenceEv),
     caution: base.caution,
     bestEstimate: bestEstimate(z, charge, estimates),
   }
@@ -186,6 +214,18 @@ export function describeSpecies(input: string | ParsedSpecies, options: Describe
       totalEnergyHartree: Number.isFinite(own.totalEnergyHartree) ? own.totalEnergyHartree : null,
       orbitals: own.orbitals,
       density: own.density ?? null,
+    }
+    const rel = scf.dirac?.species
+    if (rel) {
+      record.dirac = {
+        method: rel.method,
+        converged: rel.converged,
+        iterations: rel.iterations,
+        totalEnergyHartree: Number.isFinite(rel.totalEnergyHartree) ? rel.totalEnergyHartree : null,
+        nucleusRadiusFm: rel.nucleusRadiusFm,
+        orbitals: rel.orbitals,
+        density: rel.density ?? null,
+      }
     }
   }
   return record

@@ -29,6 +29,8 @@ describe('constants', () => {
       'scf-delta',
       'scf-eigenvalue',
       'dirac-qed-hydrogen-like',
+      'dirac-scf-delta',
+      'dirac-scf-eigenvalue',
     ])
     for (const m of METHODS) {
       expect(m.description.length).toBeGreaterThan(20)
