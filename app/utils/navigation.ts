@@ -17,4 +17,5 @@ export const NAVIGATION: NavItem[] = [
   { to: '/inventory', label: 'Sources', capability: 'readInventory' },
   { to: '/audit', label: 'Audit trail', capability: 'readAudit' },
   { to: '/people', label: 'People', capability: 'managePeople' },
+  { to: '/jobs', label: 'Jobs', capability: 'viewJobs' },
 ]

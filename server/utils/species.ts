@@ -57,7 +57,8 @@ export function speciesOut(row: SpeciesRow) {
  */
 export async function recordSpecies(event: H3Event, parsed: ParsedSpecies) {
   const record = await recordToFreeze(parsed)
-  const methods = record.ionisationEnergy.estimates.map((e) => e.method)
+  // the methods that produced a number (one that does not apply is in the record with its reason)
+  const methods = record.ionisationEnergy.estimates.flatMap((e) => (e.eV === null ? [] : [e.method]))
   const notations = formatSpecies(parsed.z, parsed.charge, parsed.massNumber)
   const user = requireUser(event)
   return useDb().transaction(async (trx) => {

@@ -31,6 +31,10 @@ export const CAN = {
   // officer's role here); licence limits set by managers.
   readInventory: ['manager', 'auditor'],
   manageLicence: ['manager'],
+  useTokens: everyone,
+  manageAllTokens: ['manager'],
+  viewJobs: ['manager'],
+  readApiDocs: everyone,
 } as const satisfies Record<string, readonly Role[]>
 
 export type Capability = keyof typeof CAN

@@ -24,7 +24,9 @@ export const SPECIES_VALIDITY_DAYS = 365
 export function speciesPayload(s: CertSpeciesInput, ctx: IssueContext) {
   const r = s.result.record
   const until = addDays(ctx.issuedAt, SPECIES_VALIDITY_DAYS)
-  const methods = s.result.methods.map((name) => {
+  // a certificate names the methods behind its numbers only
+  const produced = new Set(r.ionisationEnergy.estimates.flatMap((e) => (e.eV === null ? [] : [e.method as string])))
+  const methods = s.result.methods.filter((name) => produced.has(name)).map((name) => {
     const m = METHODS.find((x) => x.name === name)
     return { name, description: m?.description ?? '', citation: m?.citation ?? '' }
   })
@@ -47,7 +49,8 @@ export function speciesPayload(s: CertSpeciesInput, ctx: IssueContext) {
       ionisation: {
         unit: 'eV',
         reference: r.ionisationEnergy.reference ? { eV: r.ionisationEnergy.reference.eV, source: r.ionisationEnergy.reference.source } : null,
-        estimates: r.ionisationEnergy.estimates.map((e) => ({ method: e.method, eV: e.eV, deviationEv: e.deviationEv ?? null, deviationPercent: e.deviationPercent ?? null, basis: e.basis ?? null })),
+        // a certificate carries numbers only; a method that does not apply is left out
+        estimates: r.ionisationEnergy.estimates.flatMap((e) => (e.eV === null ? [] : [{ method: e.method, eV: e.eV, deviationEv: e.deviationEv ?? null, deviationPercent: e.deviationPercent ?? null, basis: e.basis ?? null }])),
         notes: [...r.ionisationEnergy.notes],
       },
       productionThreshold: r.productionThreshold ? { eV: r.productionThreshold.eV, from: r.productionThreshold.from, source: r.productionThreshold.source } : null,

@@ -5,7 +5,36 @@ import { getElement, getIsotope } from './elements'
 import { slaterTotalEnergyRydberg, nStar, screeningConstant } from './slater'
 import type { Subshell } from './subshells'
 
-export type MethodName = 'slater-hydrogenic' | 'slater-total-energy' | 'dirac-hydrogen-like' | 'scf-delta' | 'scf-eigenvalue'
+export type MethodName =
+  | 'slater-hydrogenic'
+  | 'slater-total-energy'
+  | 'dirac-hydrogen-like'
+  | 'dirac-qed-hydrogen-like'
+  | 'scf-delta'
+  | 'scf-eigenvalue'
+  // the relativistic solver's methods (shared/physics/scf, Dirac–Kohn–Sham)
+  | 'dirac-scf-delta'
+  | 'dirac-scf-eigenvalue'
+
+/**
+ * Where a method is meant to be used. Outside it the record carries `eV: null` and the reason
+ * (methodDomainReason). One-electron ions are a case of their own: there the Dirac energy with
+ * its corrections is exact to published theory, so a non-relativistic method is not shown.
+ */
+export interface MethodDomain {
+  /** one line for the page: which species and which electron the method is for */
+  text: string
+  /**
+   * 'only': one-electron ions only; 'any'; 'never': a non-relativistic model, not shown for a
+   * one-electron ion once relativity, (Zα)²/4 of the energy, exceeds 0.01 % (Z ≥ 3): there its
+   * number would only repeat the exact non-relativistic value the Dirac energy supersedes
+   */
+  oneElectron: 'only' | 'never' | 'any'
+  /** whether the method is meant for negative ions */
+  anions: boolean
+  /** the Z range the method's data cover */
+  zMax: number
+}
 
 export interface MethodInfo {
   name: MethodName
@@ -14,6 +43,27 @@ export interface MethodInfo {
   citation: string
   /** true when the estimate comes from the SCF solver in ./scf rather than this module */
   scf: boolean
+  domain: MethodDomain
+}
+
+const NOT_ONE_ELECTRON =
+  'one-electron ion: a non-relativistic model, superseded here by the Dirac energy with its QED corrections (dirac-qed-hydrogen-like)'
+
+/** Why `method` does not apply to a species of Z, charge and electrons, or null when it does. */
+export function methodDomainReason(method: MethodInfo, z: number, charge: number, electrons: number): string | null {
+  if (electrons === 0) return 'bare nucleus: no electron to remove'
+  if (z > method.domain.zMax) return `the method's data cover Z ≤ ${method.domain.zMax}`
+  if (method.domain.oneElectron === 'only' && electrons !== 1) return 'one-electron ions only'
+  if (method.domain.oneElectron === 'never' && electrons === 1 && (z * CODATA_2018.fineStructure) ** 2 / 4 > 1e-4) return NOT_ONE_ELECTRON
+  if (charge < 0 && !method.domain.anions) return 'not made for negative ions: its screening was fitted to atoms and positive ions, not to a loosely bound extra electron'
+  return null
+}
+
+/** The reason a computed energy cannot be printed as an ionisation energy, or null when it can. */
+export function unphysicalReason(eV: number): string | null {
+  if (!Number.isFinite(eV)) return 'the model gave no finite energy'
+  if (eV <= 0) return `the model gives no binding (${eV.toFixed(2)} eV): outside what it can describe`
+  return null
 }
 
 export const METHODS: readonly MethodInfo[] = [
@@ -22,30 +72,58 @@ export const METHODS: readonly MethodInfo[] = [
     description: 'Hydrogen-like energy of the next electron to leave: 13.6057 eV · Z_eff² / n*², Z_eff and n* by Slater\'s rules',
     citation: 'J. C. Slater, Phys. Rev. 36, 57 (1930)',
     scf: false,
+    domain: { text: 'atoms and positive ions (one-electron ions only up to Z = 2); the outermost electron', oneElectron: 'never', anions: false, zMax: 118 },
   },
   {
     name: 'slater-total-energy',
     description: 'Difference of Slater total energies −13.6057 eV · Σ N_i (Z_eff,i / n*_i)² of the next ion and the species',
     citation: 'J. C. Slater, Phys. Rev. 36, 57 (1930)',
     scf: false,
+    domain: { text: 'atoms and positive ions (one-electron ions only up to Z = 2); the outermost electron', oneElectron: 'never', anions: false, zMax: 118 },
   },
   {
     name: 'dirac-hydrogen-like',
     description: 'One-electron ions only: Dirac 1s binding m_r c² (1 − √(1 − (Zα)²)) with the reduced mass, point nucleus, no QED',
     citation: 'P. A. M. Dirac, Proc. R. Soc. A 117, 610 (1928); constants CODATA 2018 (Tiesinga et al., Rev. Mod. Phys. 93, 025010 (2021))',
     scf: false,
+    domain: { text: 'one-electron ions, 1s electron; the point-nucleus baseline of dirac-qed-hydrogen-like', oneElectron: 'only', anions: false, zMax: 118 },
   },
   {
     name: 'scf-delta',
     description: 'Total-energy difference (ΔSCF) of self-consistent central-field solutions of the next ion and the species: spin-polarised local density with the self-interaction correction, spherical average',
     citation: 'W. Kohn and L. J. Sham, Phys. Rev. 140, A1133 (1965); S. H. Vosko, L. Wilk and M. Nusair, Can. J. Phys. 58, 1200 (1980); J. P. Perdew and A. Zunger, Phys. Rev. B 23, 5048 (1981)',
     scf: true,
+    domain: { text: 'atoms, positive and negative ions (one-electron ions only up to Z = 2); non-relativistic', oneElectron: 'never', anions: true, zMax: 118 },
   },
   {
     name: 'scf-eigenvalue',
     description: 'Minus the highest occupied orbital eigenvalue of the same self-interaction-corrected central-field solution',
     citation: 'J. P. Perdew and A. Zunger, Phys. Rev. B 23, 5048 (1981); J. F. Janak, Phys. Rev. B 18, 7165 (1978)',
     scf: true,
+    domain: { text: 'atoms, positive and negative ions (one-electron ions only up to Z = 2); non-relativistic', oneElectron: 'never', anions: true, zMax: 118 },
+  },
+  {
+    name: 'dirac-qed-hydrogen-like',
+    description:
+      'One-electron ions only: the Dirac 1s energy with the reduced mass, plus the finite-nuclear-size shift, the one-loop self-energy and the Uehling vacuum polarisation, each shown',
+    citation:
+      'V. M. Shabaev, J. Phys. B 26, 1103 (1993); V. M. Shabaev, I. I. Tupitsyn and V. A. Yerokhin, Phys. Rev. A 88, 012513 (2013); P. J. Mohr, Phys. Rev. A 46, 4421 (1992); E. A. Uehling, Phys. Rev. 48, 55 (1935)',
+    scf: false,
+    domain: { text: 'one-electron ions, 1s electron, Z = 1–118 (self-energy table to Z = 120)', oneElectron: 'only', anions: false, zMax: 118 },
+  },
+  {
+    name: 'dirac-scf-delta',
+    description: 'Total-energy difference (ΔSCF) of relativistic Dirac–Kohn–Sham central-field solutions of the next ion and the species: large and small components of every nlj subshell, spin-polarised local density with the self-interaction correction, finite nucleus',
+    citation: 'D. A. Liberman, D. T. Cromer and J. T. Waber, Comput. Phys. Commun. 2, 107 (1971); J. P. Perdew and A. Zunger, Phys. Rev. B 23, 5048 (1981); nuclear radii W. R. Johnson and G. Soff, At. Data Nucl. Data Tables 33, 405 (1985)',
+    scf: true,
+    domain: { text: 'atoms and positive ions, Z = 1–118, every charge state; relativistic, finite nucleus, no QED', oneElectron: 'any', anions: false, zMax: 118 },
+  },
+  {
+    name: 'dirac-scf-eigenvalue',
+    description: 'Minus the highest occupied nlj eigenvalue of the same self-interaction-corrected Dirac–Kohn–Sham solution',
+    citation: 'D. A. Liberman, D. T. Cromer and J. T. Waber, Comput. Phys. Commun. 2, 107 (1971); J. P. Perdew and A. Zunger, Phys. Rev. B 23, 5048 (1981)',
+    scf: true,
+    domain: { text: 'atoms and positive ions, Z = 1–118, every charge state; relativistic, finite nucleus, no QED', oneElectron: 'any', anions: false, zMax: 118 },
   },
 ]
 

@@ -34,6 +34,8 @@ export const ACCEPTED_NOTATIONS = [
   'Fe I',
   '56Fe13+',
   '56Fe XIV',
+  'Ca-48 10+',
+  'Ca48 XI',
   'O-',
   'Au1-',
 ] as const
@@ -133,6 +135,64 @@ function readCharge(rest: string, z: number, symbol: string): number {
   return size
 }
 
+/**
+ * The isotope grammar every part of the product shares (species look-up, sample filter, nuclide
+ * fields): a symbol and a mass number in either order, joined by nothing, a hyphen or a space —
+ * 'Ca-48', 'Ca48', 'Ca 48', '48Ca', '48-Ca', '48 Ca'. Only the split into letters and digits; the
+ * callers decide how strict to be about the symbol's case.
+ */
+const ISOTOPE_SYMBOL_FIRST = /^([A-Za-z]{1,3})[- ]?(\d{1,3})$/
+const ISOTOPE_MASS_FIRST = /^(\d{1,3})[- ]?([A-Za-z]{1,3})$/
+
+function splitIsotope(text: string): { letters: string; massText: string } | null {
+  const first = ISOTOPE_SYMBOL_FIRST.exec(text)
+  if (first) return { letters: first[1], massText: first[2] }
+  const mass = ISOTOPE_MASS_FIRST.exec(text)
+  return mass ? { letters: mass[2], massText: mass[1] } : null
+}
+
+/**
+ * A nuclide as a lab writes it ('Ca-48', '48Ca', 'Ca48', 'ni 58'), or null when the text is not
+ * one or names no listed nuclide. The symbol may be in any case here (a search box, not a formula).
+ */
+export function parseIsotopeToken(text: string): { z: number; massNumber: number } | null {
+  if (typeof text !== 'string' || text.length > 16) return null
+  const parts = splitIsotope(text.replace(/\s+/g, ' ').trim())
+  if (!parts || /^0/.test(parts.massText)) return null
+  const element = getElement(parts.letters)
+  if (!element) return null
+  const massNumber = Number(parts.massText)
+  return getIsotope(element.z, massNumber) ? { z: element.z, massNumber } : null
+}
+
+/** Checks a mass number read from the input and returns it; throws with the reason otherwise. */
+function readMassNumber(massText: string, z: number, symbol: string): number {
+  if (/^0/.test(massText)) throw new SpeciesParseError('a mass number cannot start with 0')
+  if (massText.length > 3) throw new SpeciesParseError('mass number too large')
+  const massNumber = Number(massText)
+  if (massNumber < z) throw new SpeciesParseError(`mass number ${massNumber} is below Z = ${z} of ${symbol}`)
+  if (!getIsotope(z, massNumber)) {
+    const isotopes = getElement(z)?.isotopes ?? []
+    const range = `${isotopes[0]?.massNumber}–${isotopes[isotopes.length - 1]?.massNumber}`
+    throw new SpeciesParseError(`${massNumber}${symbol} is not a known isotope (known: ${range}${symbol})`)
+  }
+  return massNumber
+}
+
+/**
+ * The isotope written symbol first ('Ca-48 10+', 'Ca48 XI', 'Ca-48'): the isotope token, then
+ * nothing or a space and the charge. 'Fe 13' or 'O-1' name no nuclide (¹³Fe, ¹O do not exist) and
+ * are left to the charge grammar; 'H-1' is hydrogen-1, as a nuclide list writes it, not H⁻.
+ */
+function symbolFirstIsotope(text: string): { token: string; rest: string } | null {
+  const m = /^([A-Za-z]{1,3}(?:-| ?)\d{1,3})((?: .*)?)$/.exec(text)
+  if (!m) return null
+  const parts = splitIsotope(m[1])
+  const element = parts && getElement(parts.letters)
+  if (!parts || !element || /^0/.test(parts.massText) || !getIsotope(element.z, Number(parts.massText))) return null
+  return { token: m[1], rest: m[2] }
+}
+
 /** Reads a species in any accepted notation; throws SpeciesParseError otherwise. */
 export function parseSpecies(input: string): ParsedSpecies {
   if (typeof input !== 'string') throw new SpeciesParseError('a species must be given as text')
@@ -142,22 +202,19 @@ export function parseSpecies(input: string): ParsedSpecies {
     .trim()
   if (text === '') throw new SpeciesParseError('no species given')
   if (text.length > MAX_INPUT) throw new SpeciesParseError(`input too long (at most ${MAX_INPUT} characters)`)
-  const m = /^(\d+)?([A-Za-z]+)(.*)$/.exec(text)
+  const isotope = symbolFirstIsotope(text)
+  if (isotope) {
+    const parts = splitIsotope(isotope.token)!
+    const { z, symbol } = readSymbol(parts.letters)
+    const charge = readCharge(isotope.rest, z, symbol)
+    return { input, z, symbol, charge, massNumber: readMassNumber(parts.massText, z, symbol) }
+  }
+  const m = /^(\d+)?[- ]?([A-Za-z]+)(.*)$/.exec(text)
   if (!m) throw new SpeciesParseError('no element symbol found')
   const [, massText, letters, rest] = m
+  if (massText === undefined && /^[- ]/.test(text)) throw new SpeciesParseError('no element symbol found')
   const { z, symbol } = readSymbol(letters)
   const charge = readCharge(rest, z, symbol)
-  let massNumber: number | null = null
-  if (massText !== undefined) {
-    if (/^0/.test(massText)) throw new SpeciesParseError('a mass number cannot start with 0')
-    if (massText.length > 3) throw new SpeciesParseError('mass number too large')
-    massNumber = Number(massText)
-    if (massNumber < z) throw new SpeciesParseError(`mass number ${massNumber} is below Z = ${z} of ${symbol}`)
-    if (!getIsotope(z, massNumber)) {
-      const isotopes = getElement(z)?.isotopes ?? []
-      const range = `${isotopes[0]?.massNumber}–${isotopes[isotopes.length - 1]?.massNumber}`
-      throw new SpeciesParseError(`${massNumber}${symbol} is not a known isotope (known: ${range}${symbol})`)
-    }
-  }
+  const massNumber = massText === undefined ? null : readMassNumber(massText, z, symbol)
   return { input, z, symbol, charge, massNumber }
 }

@@ -6,7 +6,8 @@
 import { nextElectronSubshell, readGroundConfiguration, type ConfigurationRule } from './configuration'
 import { getElement } from './elements'
 import { lsTerms } from './ls-terms'
-import { SLATER_RYDBERG_EV, hydrogenicEv, type MethodName } from './methods'
+import { METHODS, SLATER_RYDBERG_EV, hydrogenicEv, methodDomainReason, type MethodName, unphysicalReason } from './methods'
+import type { QedCorrection } from './qed/index'
 import { formatSpecies } from './notation'
 import {
   IONISATION_SOURCE,
@@ -23,12 +24,16 @@ import { groundTerm, orbitalBoxes, unpairedElectrons, type SubshellBoxes } from 
 
 export interface Estimate {
   readonly method: MethodName
-  readonly eV: number
+  /** null when the method does not apply to this species; then `notApplicable` says why */
+  readonly eV: number | null
+  readonly notApplicable?: string
   /** estimate − reference, where a reference exists */
   readonly deviationEv?: number
   readonly deviationPercent?: number
   /** what the estimate assumed, where that matters (the isotope for the reduced mass) */
   readonly basis?: string
+  /** the corrections included, each as its change of the ionisation energy (dirac-qed-hydrogen-like) */
+  readonly corrections?: readonly QedCorrection[]
 }
 
 /** One distinct LS term of the configuration and how often it occurs. */
@@ -78,6 +83,11 @@ export function round(x: number, digits: number): number {
   return Math.round(x * scale) / scale
 }
 
+/** A method that does not apply here: no number, the reason instead. */
+export function notApplicable(method: MethodName, reason: string): Estimate {
+  return Object.freeze({ method, eV: null, notApplicable: reason })
+}
+
 /** An estimate with its deviation from the reference (eV and percent) where there is one. */
 export function estimate(method: MethodName, eV: number, reference: number | null, basis?: string): Estimate {
   const out: { -readonly [K in keyof Estimate]: Estimate[K] } = { method, eV: round(eV, 9) }
@@ -87,6 +97,27 @@ export function estimate(method: MethodName, eV: number, reference: number | nul
   }
   if (basis !== undefined) out.basis = basis
   return out
+}
+
+/**
+ * The estimate of `method` for a species, or "not applicable" with the reason: outside the
+ * method's domain (methods.ts), without a value (`eV` null: `missing` says why), or unphysical.
+ */
+export function judged(
+  method: MethodName,
+  species: { z: number; charge: number; electrons: number },
+  eV: number | null,
+  reference: number | null,
+  extra: { basis?: string; missing?: string; corrections?: Estimate['corrections'] } = {},
+): Estimate {
+  const info = METHODS.find((m) => m.name === method)
+  const outside = info ? methodDomainReason(info, species.z, species.charge, species.electrons) : null
+  if (outside) return notApplicable(method, outside)
+  if (eV === null) return notApplicable(method, extra.missing ?? 'no value')
+  const unphysical = unphysicalReason(eV)
+  if (unphysical) return notApplicable(method, unphysical)
+  const out = estimate(method, eV, reference, extra.basis)
+  return extra.corrections ? Object.freeze({ ...out, corrections: extra.corrections }) : Object.freeze(out)
 }
 
 const termCache = new Map<string, readonly TermSummary[]>()
@@ -139,9 +170,10 @@ function compute(z: number, charge: number): SpeciesBase {
   let slaterTotalEnergy: Estimate | null = null
   if (next) {
     const row = own.rows[shells.findIndex((s) => s.n === next.n && s.l === next.l)]
-    slaterHydrogenic = Object.freeze(estimate('slater-hydrogenic', hydrogenicEv(row.zEff, row.nStar), referenceEv))
+    const species = { z, charge, electrons: config.electrons }
+    slaterHydrogenic = judged('slater-hydrogenic', species, hydrogenicEv(row.zEff, row.nStar), referenceEv)
     const total = SLATER_RYDBERG_EV * (slater(z, charge + 1).energyRydberg - own.energyRydberg)
-    slaterTotalEnergy = Object.freeze(estimate('slater-total-energy', total, referenceEv))
+    slaterTotalEnergy = judged('slater-total-energy', species, total, referenceEv)
   }
   let productionThreshold: SpeciesBase['productionThreshold'] = null
   let productionThresholdNote: string | undefined

@@ -40,17 +40,33 @@ export function formatRecord(r: SpeciesRecord): string {
     lines.push(...table([head, ...rows], '    '))
   }
   const ie = r.ionisationEnergy
+  if (r.electrons === 0) lines.push('  ionisation energy     none: no electron to remove')
+  if (r.bestEstimate) {
+    const b = r.bestEstimate
+    lines.push(`  best estimate         ${eV(b.eV)} eV (${b.method}), typically ±${b.typicalPercent} % for ${b.classLabel}`)
+  }
   if (r.electrons > 0) {
     lines.push(`  ionisation energy (next electron from ${ie.nextElectron})`)
     const rows: string[][] = []
     if (ie.reference) rows.push(['reference', `${eV(ie.reference.eV)} eV`, '', ie.reference.source])
     else rows.push(['reference', '—', '', r.electronAffinity && 'statement' in r.electronAffinity ? r.electronAffinity.statement : 'no reference value'])
     for (const e of ie.estimates) {
+      if (e.eV === null) {
+        rows.push([e.method, 'n/a', '', `not applicable: ${e.notApplicable ?? ''}`])
+        continue
+      }
       const deviation = e.deviationPercent === undefined ? '' : signed(e.deviationPercent, ' %')
       rows.push([e.method, `${eV(e.eV)} eV`, deviation, e.basis ?? ''])
     }
     lines.push(...table(rows, '    '))
+    for (const e of ie.estimates) {
+      for (const c of e.corrections ?? []) lines.push(`      ${e.method}: ${c.name} ${c.eV >= 0 ? '+' : '−'}${Math.abs(c.eV).toPrecision(4)} eV (${c.source})`)
+    }
     for (const note of ie.notes) lines.push(`    note: ${note}`)
+  }
+  if (r.bindingEnergies.length > 0) {
+    lines.push('  binding energies (relativistic SCF; outermost = ionisation energy)')
+    lines.push(...table(r.bindingEnergies.map((b) => [b.subshell, `${eV(b.eV)} eV`, b.method]), '    '))
   }
   if (r.productionThreshold) {
     const p = r.productionThreshold

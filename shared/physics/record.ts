@@ -4,18 +4,22 @@
  * Nested objects are frozen and shared between records of the same species (record-parts.ts);
  * copy before changing one.
  */
-import type { ScfOrbital, ScfRadialDensity, ScfSpeciesEstimates } from './scf/types'
+import { type BestEstimate, bestEstimate } from './best-estimate'
+import { bindingEnergies, type BindingEnergy } from './binding'
+import type { DiracOrbital, DiracRadialDensity, ScfOrbital, ScfRadialDensity, ScfSpeciesEstimates } from './scf/types'
 import type { ConfigurationRule } from './configuration'
-import { METHOD_NAMES, type MethodName, diracHydrogenLikeEv, nuclearMass } from './methods'
+import { CODATA_2018, METHODS, METHOD_NAMES, type MethodName, diracHydrogenLikeEv, nuclearMass } from './methods'
+import { oneElectronEnergy } from './qed/index'
 import { formatSpecies, parseSpecies, type ParsedSpecies } from './notation'
 import type { ElectronAffinity, ReferenceGroundLevel, SourcedValue } from './reference'
-import { type Estimate, type TermSummary, estimate, round, speciesBase } from './record-parts'
+import { type Estimate, type TermSummary, judged, round, speciesBase } from './record-parts'
 import type { ScreeningRow } from './slater'
 import { subshellLabel } from './subshells'
 import type { SubshellBoxes } from './terms'
 import { ENGINE_VERSION } from './version'
 
 export type { Estimate, TermSummary } from './record-parts'
+export type { BindingEnergy } from './binding'
 
 export interface DescribeOptions {
   /** methods to run (default: every applicable one); unknown names throw */
@@ -32,6 +36,17 @@ export interface ScfSummary {
   totalEnergyHartree: number | null
   orbitals: readonly ScfOrbital[]
   density: ScfRadialDensity | null
+}
+
+/** What the record carries of the relativistic solution: nlj orbitals and large/small densities. */
+export interface DiracSummary {
+  method: string
+  converged: boolean
+  iterations: number
+  totalEnergyHartree: number | null
+  nucleusRadiusFm: number
+  orbitals: readonly DiracOrbital[]
+  density: DiracRadialDensity | null
 }
 
 export type ScreeningEntry = Readonly<ScreeningRow> & { readonly zEffMeanRadius?: number }
@@ -74,7 +89,17 @@ export interface SpeciesRecord {
   productionThresholdNote?: string
   /** the SCF solution of this species, when the caller supplied one */
   scf?: ScfSummary
+  /** binding energy of every occupied nlj subshell (binding.ts); empty without a relativistic solution */
+  bindingEnergies: readonly BindingEnergy[]
+  /** the relativistic SCF solution of this species, when the caller supplied one */
+  dirac?: DiracSummary
   caution: string
+  /**
+   * The estimate to lead with: of the methods with a number here, the one with the smallest
+   * measured mean deviation for this class of species, with that mean (best-estimate.ts); null
+   * when no method with a number has a measured figure (a bare nucleus, most negative ions).
+   */
+  bestEstimate: BestEstimate | null
 }
 
 const ALL_METHODS: ReadonlySet<MethodName> = new Set(METHOD_NAMES)
@@ -102,11 +127,20 @@ export function describeSpecies(input: string | ParsedSpecies, options: Describe
   const referenceEv = base.reference?.eV ?? null
 
   const estimates: Estimate[] = []
-  if (base.slaterHydrogenic && methods.has('slater-hydrogenic')) estimates.push(base.slaterHydrogenic)
-  if (base.slaterTotalEnergy && methods.has('slater-total-energy')) estimates.push(base.slaterTotalEnergy)
-  if (base.electrons === 1 && methods.has('dirac-hydrogen-like')) {
-    const mass = nuclearMass(z, massNumber)
-    estimates.push(estimate('dirac-hydrogen-like', diracHydrogenLikeEv(z, mass.eV), referenceEv, `reduced mass with the ${mass.basis}`))
+  const species = { z, charge, electrons: base.electrons }
+  // a bare nucleus has no electron to remove: no method is asked (the page says so)
+  const asked = (m: MethodName) => base.electrons > 0 && methods.has(m)
+  if (base.slaterHydrogenic && asked('slater-hydrogenic')) estimates.push(base.slaterHydrogenic)
+  if (base.slaterTotalEnergy && asked('slater-total-energy')) estimates.push(base.slaterTotalEnergy)
+  if (asked('dirac-hydrogen-like') || asked('dirac-qed-hydrogen-like')) {
+    const mass = base.electrons === 1 ? nuclearMass(z, massNumber) : null
+    const dirac = mass ? diracHydrogenLikeEv(z, mass.eV) : null
+    const basis = mass ? `reduced mass with the ${mass.basis}` : undefined
+    if (asked('dirac-hydrogen-like')) estimates.push(judged('dirac-hydrogen-like', species, dirac, referenceEv, { basis }))
+    if (asked('dirac-qed-hydrogen-like')) {
+      const qed = mass && dirac !== null && z <= 118 ? oneElectronEnergy(z, mass.massNumber, dirac, CODATA_2018.electronMassEv) : null
+      estimates.push(judged('dirac-qed-hydrogen-like', species, qed?.totalEv ?? null, referenceEv, { basis, corrections: qed?.corrections }))
+    }
   }
 
   const notes: string[] = []
@@ -114,9 +148,23 @@ export function describeSpecies(input: string | ParsedSpecies, options: Describe
   const scf = options.scf ?? null
   if (scf) {
     for (const note of [failure('this species', scf.species), failure('the next ion', scf.next)]) if (note) notes.push(note)
-    if (methods.has('scf-delta') && scf.deltaEv !== null) estimates.push(estimate('scf-delta', scf.deltaEv, referenceEv, scf.species.method))
-    if (methods.has('scf-eigenvalue') && scf.eigenvalueEv !== null) {
-      estimates.push(estimate('scf-eigenvalue', scf.eigenvalueEv, referenceEv, scf.species.method))
+    const missing = 'no converged self-consistent solution for this species and the next ion'
+    const dirac = scf.dirac
+    for (const info of METHODS) {
+      if (!info.scf || !asked(info.name)) continue
+      const relativistic = info.name === 'dirac-scf-delta' || info.name === 'dirac-scf-eigenvalue'
+      const value =
+        info.name === 'scf-delta' ? scf.deltaEv
+        : info.name === 'scf-eigenvalue' ? scf.eigenvalueEv
+        : relativistic ? (dirac ? (info.name === 'dirac-scf-delta' ? dirac.deltaEv : dirac.eigenvalueEv) : undefined)
+        : scf.byMethod?.[info.name]
+      // a method the caller's SCF results do not cover is left out (not computed), not "not applicable"
+      if (value === undefined) continue
+      const basis = relativistic && dirac ? dirac.species.method : scf.species.method
+      estimates.push(judged(info.name, species, value, referenceEv, { basis, missing }))
+    }
+    if (dirac) {
+      for (const note of [failure('this species (relativistic)', dirac.species), failure('the next ion (relativistic)', dirac.next)]) if (note) notes.push(note)
     }
     if (scf.species.converged) {
       screening = base.screening.map((row) => {
@@ -150,7 +198,9 @@ export function describeSpecies(input: string | ParsedSpecies, options: Describe
     unpaired: base.unpaired,
     orbitals: base.orbitals,
     terms: base.terms,
+    bindingEnergies: bindingEnergies(scf?.dirac, referenceEv),
     caution: base.caution,
+    bestEstimate: bestEstimate(z, charge, estimates),
   }
   if (base.referenceGroundLevel) record.referenceGroundLevel = base.referenceGroundLevel
   if (base.electronAffinity) record.electronAffinity = base.electronAffinity
@@ -164,6 +214,18 @@ export function describeSpecies(input: string | ParsedSpecies, options: Describe
       totalEnergyHartree: Number.isFinite(own.totalEnergyHartree) ? own.totalEnergyHartree : null,
       orbitals: own.orbitals,
       density: own.density ?? null,
+    }
+    const rel = scf.dirac?.species
+    if (rel) {
+      record.dirac = {
+        method: rel.method,
+        converged: rel.converged,
+        iterations: rel.iterations,
+        totalEnergyHartree: Number.isFinite(rel.totalEnergyHartree) ? rel.totalEnergyHartree : null,
+        nucleusRadiusFm: rel.nucleusRadiusFm,
+        orbitals: rel.orbitals,
+        density: rel.density ?? null,
+      }
     }
   }
   return record

@@ -1,4 +1,4 @@
-import { getElement } from '../physics/index'
+import { getElement, parseIsotopeToken } from '../physics/index'
 
 export interface NuclideRef {
   z: number
@@ -7,19 +7,13 @@ export interface NuclideRef {
 }
 
 /**
- * A nuclide as people write it ("U-238", "238U", "U238", "Am 241"),
- * checked against the nuclide data. Null when it names no listed nuclide.
+ * A nuclide as people write it ("U-238", "238U", "U238", "Am 241"), checked against the nuclide
+ * data; null when it names no listed nuclide. The grammar is the species engine's own
+ * (parseIsotopeToken), so the sample filter and the species look-up read isotopes alike.
  */
 export function parseNuclide(text: string): NuclideRef | null {
-  const t = text.trim()
-  const m = /^([A-Za-z]{1,2})[\s-]?(\d{1,3})$/.exec(t) ?? /^(\d{1,3})[\s-]?([A-Za-z]{1,2})$/.exec(t)
-  if (!m) return null
-  const [symbol, mass] = /^\d/.test(m[1]!) ? [m[2]!, m[1]!] : [m[1]!, m[2]!]
-  const element = getElement(symbol)
-  if (!element || element.symbol.toLowerCase() !== symbol.toLowerCase()) return null
-  const massNumber = Number(mass)
-  if (!element.isotopes.some((i) => i.massNumber === massNumber)) return null
-  return { z: element.z, symbol: element.symbol, massNumber }
+  const hit = parseIsotopeToken(text)
+  return hit ? { z: hit.z, symbol: getElement(hit.z)!.symbol, massNumber: hit.massNumber } : null
 }
 
 /** The stored spelling of a nuclide: symbol, hyphen, mass number ("U-238"). */

@@ -281,3 +281,6 @@ export const LicenceLimitBody = z.strictObject({
 
 /** GET /api/inventory. */
 export const InventoryQuery = z.object({ format: z.enum(['json', 'csv']).default('json') })
+
+/** DELETE /api/samples/:id?version=N: retiring names the version the person saw. */
+export const DeleteSampleQuery = z.object({ version: z.coerce.number({ error: 'Give the version you retire (version=N)' }).int().min(1) })

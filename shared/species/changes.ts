@@ -8,7 +8,7 @@ export interface RecordChange {
 
 type Comparable = Pick<SpeciesRecord, 'configuration' | 'core' | 'term' | 'isoelectronic' | 'ionisationEnergy' | 'productionThreshold'>
 
-function estimatesOf(r: Comparable): Map<string, number> {
+function estimatesOf(r: Comparable): Map<string, number | null> {
   return new Map(r.ionisationEnergy.estimates.map((e) => [e.method, e.eV]))
 }
 

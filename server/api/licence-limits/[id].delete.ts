@@ -1,12 +1,12 @@
-import { z } from 'zod'
+import { IdParam } from '#shared/schemas/common'
 import { CAN } from '#shared/auth/roles'
 
-const Params = z.object({ id: z.uuid() })
+
 
 // Removes a licence limit; audited.
 export default defineEventHandler(async (event) => {
   requireRole(event, ...CAN.manageLicence)
-  const { id } = paramsValid(event, Params)
+  const { id } = paramsValid(event, IdParam)
   const db = useDb()
   return db.transaction(async (trx) => {
     const [row] = await trx('licence_limits').where({ id }).delete().returning('*')

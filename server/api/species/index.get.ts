@@ -2,7 +2,7 @@ import { GUARDED_CSV } from '#shared/csv/safe'
 import { stringify } from 'csv-stringify/sync'
 import { CAN } from '#shared/auth/roles'
 import { SpeciesListQuery } from '#shared/schemas/species'
-import { getElement } from '#shared/physics'
+import { getElement, parseSpecies } from '#shared/physics'
 
 const SORTS: Record<string, string[]> = { label: ['z', 'charge'], z: ['z', 'charge'], charge: ['charge', 'z'], isoelectronic: ['isoelectronic', 'z'], recorded: ['created_at'] }
 
@@ -13,9 +13,21 @@ export default defineEventHandler(async (event) => {
   const element = query.element ? (getElement(/^\d+$/.test(query.element) ? Number(query.element) : query.element) ?? null) : undefined
   if (element === null) throw createError({ statusCode: 400, statusMessage: 'Invalid input', message: 'Invalid input', data: { issues: [{ path: 'element', message: 'Give an element symbol (Fe) or number (26)' }] } })
 
+  // a search that reads as a species in any notation ('Ca-48 10+', 'Ca48 XI') also finds that species
+  let named: { z: number; charge: number; massNumber: number | null } | null = null
+  try {
+    if (query.q) named = parseSpecies(query.q)
+  } catch {
+    named = null
+  }
   const filtered = () =>
     db('species').where((w) => {
-      if (query.q) w.where((s) => s.whereILike('label', `%${query.q}%`).orWhereILike('spectroscopic', `%${query.q}%`).orWhereILike('element_name', `%${query.q}%`))
+      if (query.q) {
+        w.where((s) => {
+          s.whereILike('label', `%${query.q}%`).orWhereILike('spectroscopic', `%${query.q}%`).orWhereILike('element_name', `%${query.q}%`)
+          if (named) s.orWhere((x) => x.where({ z: named!.z, charge: named!.charge }).whereRaw('coalesce(mass_number, 0) = ?', [named!.massNumber ?? 0]))
+        })
+      }
       if (element) w.where('z', element.z)
       if (query.chargeMin !== undefined) w.where('charge', '>=', query.chargeMin)
       if (query.chargeMax !== undefined) w.where('charge', '<=', query.chargeMax)

@@ -20,7 +20,8 @@ export default defineEventHandler(async (event) => {
       charge,
       label: record.notations.ionic,
       reference: record.ionisationEnergy.reference?.eV ?? null,
-      estimates: Object.fromEntries(record.ionisationEnergy.estimates.map((e) => [e.method, e.eV])) as Record<string, number>,
+      // numbers only: a method that does not apply to a charge state has no point there
+      estimates: Object.fromEntries(record.ionisationEnergy.estimates.flatMap((e) => (e.eV === null ? [] : [[e.method, e.eV]]))) as Record<string, number>,
     })
   }
   return { z, symbol: element.symbol, name: element.name, referenceSource: IONISATION_SOURCE, scfCached: scf.size, points }

@@ -203,7 +203,7 @@ describe('every species', () => {
         expect(g.text.split(' ').filter(Boolean).length).toBe(g.subshells.length)
       }
     }
-  })
+  }, 60_000) // 7,257 species: seconds on a loaded shared machine
 
   it('gives a bare nucleus an empty configuration and core', () => {
     const g = groundConfiguration(26, 26)

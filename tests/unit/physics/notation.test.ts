@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { SpeciesParseError, formatSpecies, fromRoman, parseSpecies, toRoman } from '../../../shared/physics/notation'
+import { SpeciesParseError, formatSpecies, fromRoman, parseIsotopeToken, parseSpecies, toRoman } from '../../../shared/physics/notation'
 
 // The notations of DESIGN §5 and issue 3, and the friendlier variants notation.ts documents.
 describe('accepted notations', () => {
@@ -119,5 +119,43 @@ describe('writing species', () => {
 
   it.each(['IIII', 'VX', 'IC', 'XIIII', 'ABC', ''])('%j is not a canonical numeral', (text) => {
     expect(fromRoman(text)).toBeNull()
+  })
+})
+
+// Issue 11 item 5: the isotope forms labs write, all one species; one grammar with the sample filter.
+describe('isotope notations', () => {
+  it.each(['Ca-48 10+', 'Ca-48 XI', '48Ca10+', '48Ca 10+', 'Ca48 10+', 'Ca 48 10+', '48-Ca XI', 'Ca48 XI'])('%j is ⁴⁸Ca¹⁰⁺', (input) => {
+    expect(parseSpecies(input)).toEqual({ input, z: 20, symbol: 'Ca', charge: 10, massNumber: 48 })
+  })
+  it.each([
+    ['Ca-48', 20, 0, 48],
+    ['U-238 89+', 92, 89, 238],
+    ['H-1', 1, 0, 1],
+    ['Fe-56 XIV', 26, 13, 56],
+  ])('%j → Z = %i, charge %i, A = %i', (input, z, charge, massNumber) => {
+    expect(parseSpecies(input)).toMatchObject({ z, charge, massNumber })
+  })
+  it('keeps a charge that is not a nuclide for the charge grammar', () => {
+    expect(parseSpecies('O-1')).toMatchObject({ z: 8, charge: -1, massNumber: null })
+    expect(() => parseSpecies('Fe 13')).toThrow(/could not read the charge/)
+  })
+  it('refuses the isotope form with a bad charge or symbol case', () => {
+    expect(() => parseSpecies('Ca-48 21+')).toThrow(/beyond the bare nucleus/)
+    expect(() => parseSpecies('CA-48 10+')).toThrow(/write the element symbol as Ca/)
+  })
+  it.each([
+    ['Ca-48', { z: 20, massNumber: 48 }],
+    ['48Ca', { z: 20, massNumber: 48 }],
+    ['Ca48', { z: 20, massNumber: 48 }],
+    ['ni 58', { z: 28, massNumber: 58 }],
+    ['58-Ni', { z: 28, massNumber: 58 }],
+    ['Ca-480', null],
+    ['Ca-048', null],
+    ['Xx-12', null],
+    ['Ca', null],
+    ['48', null],
+    ['Ca-48 10+', null],
+  ])('parseIsotopeToken(%j)', (text, expected) => {
+    expect(parseIsotopeToken(text)).toEqual(expected)
   })
 })
