@@ -29,6 +29,8 @@ const MATRIX: Array<{ route: string; method: string; body?: unknown; expect: Rec
   { method: 'GET', route: `/api/samples/${randomUUID()}/history`, expect: { manager: 404, scientist: 404, technician: 404, auditor: 404, anonymous: 401 } },
   { method: 'POST', route: `/api/samples/${randomUUID()}/datasheets`, expect: { manager: 404, scientist: 403, technician: 403, auditor: 403, anonymous: 401 } },
   { method: 'GET', route: `/api/datasheets/${randomUUID()}/download`, expect: { manager: 404, scientist: 404, technician: 404, auditor: 404, anonymous: 401 } },
+  { method: 'POST', route: `/api/datasheets/${randomUUID()}/replace`, expect: { manager: 404, scientist: 403, technician: 403, auditor: 403, anonymous: 401 } },
+  { method: 'POST', route: `/api/datasheets/${randomUUID()}/withdraw`, body: { reason: 'Not for this sample' }, expect: { manager: 404, scientist: 403, technician: 403, auditor: 403, anonymous: 401 } },
   { method: 'POST', route: '/api/samples/import?dryRun=true', body: 'name,material,form\n', expect: { manager: 200, scientist: 403, technician: 403, auditor: 403, anonymous: 401 } },
   { method: 'POST', route: '/api/samples/import', body: 'name,material,form\n', expect: { manager: 400, scientist: 403, technician: 403, auditor: 403, anonymous: 401 } },
   { method: 'GET', route: '/api/locations', expect: { manager: 200, scientist: 200, technician: 200, auditor: 200, anonymous: 401 } },
@@ -55,6 +57,9 @@ const MATRIX: Array<{ route: string; method: string; body?: unknown; expect: Rec
   { method: 'POST', route: `/api/samples/${randomUUID()}/custody`, body: { action: 'teleport' }, expect: { manager: 400, scientist: 403, technician: 400, auditor: 403, anonymous: 401 } },
   { method: 'POST', route: `/api/samples/${randomUUID()}/custody`, body: { action: 'condition', version: 1, note: 'fine' }, expect: { manager: 404, scientist: 403, technician: 404, auditor: 403, anonymous: 401 } },
   { method: 'GET', route: `/api/samples/${randomUUID()}/custody`, expect: { manager: 404, scientist: 404, technician: 404, auditor: 404, anonymous: 401 } },
+  { method: 'GET', route: '/api/checkouts?scope=overdue', expect: { manager: 200, scientist: 403, technician: 200, auditor: 403, anonymous: 401 } },
+  { method: 'GET', route: '/api/checkouts?scope=everything', expect: { manager: 400, scientist: 403, technician: 400, auditor: 403, anonymous: 401 } },
+  { method: 'GET', route: '/api/custody/people?q=a', expect: { manager: 200, scientist: 403, technician: 200, auditor: 403, anonymous: 401 } },
   { method: 'POST', route: '/api/notices/run', expect: { manager: 200, scientist: 403, technician: 403, auditor: 403, anonymous: 401 } },
 ]
 
