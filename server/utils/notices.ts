@@ -71,7 +71,8 @@ export async function runDailyNotices(): Promise<{ recertification: number; over
     .orderBy('code')
     .select('id', 'code', 'name', 'recertify_by')
   const byKey = new Map(due.map((s) => [`${s.id}:${s.recertify_by}`, { id: s.id, code: s.code, name: s.name, recertifyBy: s.recertify_by! }]))
-  const recertified = await sendOnce('recertification_due', [...byKey.keys()], managers, (keys) => recertificationMail(keys.map((k) => byKey.get(k)!)))
+  const today = String(((await db.raw('select current_date::text as d')) as { rows: { d: string }[] }).rows[0]!.d)
+  const recertified = await sendOnce('recertification_due', [...byKey.keys()], managers, (keys) => recertificationMail(keys.map((k) => byKey.get(k)!), today))
 
   const overdueRows = await db('sample_checkouts as k')
     .join('samples as s', 's.id', 'k.sample_id')
