@@ -21,6 +21,7 @@ function form(bytes: Uint8Array, name: string): FormData {
   f.append('file', new Blob([Uint8Array.from(bytes)], { type: 'application/pdf' }), name)
   return f
 }
+const inDays = (n: number) => new Date(Date.now() + n * 86_400_000).toISOString().slice(0, 10)
 const sha = (b: Buffer) => createHash('sha256').update(b).digest('hex')
 
 describe('datasheet versions', () => {
@@ -47,7 +48,7 @@ describe('datasheet versions', () => {
   })
 
   it('withdraws a datasheet: hidden from the sample and new certificates, kept with its file, audited with the reason', async () => {
-    const s = await createSample(manager)
+    const s = await createSample(manager, { recertifyBy: inDays(300) })
     const kept = (await manager.post(`/api/samples/${s.id}/datasheets`, form(pdf('keep'), 'Keep.pdf'))).body
     const gone = (await manager.post(`/api/samples/${s.id}/datasheets`, form(pdf('wrong sample'), 'Wrong.pdf'))).body
     const r = await manager.post(`/api/datasheets/${gone.id}/withdraw`, { reason: 'Belongs to another lot' })
@@ -67,7 +68,7 @@ describe('datasheet versions', () => {
   })
 
   it('refuses to withdraw a datasheet a certificate in force lists, until that certificate is revoked', async () => {
-    const s = await createSample(manager)
+    const s = await createSample(manager, { recertifyBy: inDays(300) })
     const sheet = (await manager.post(`/api/samples/${s.id}/datasheets`, form(pdf('certified'), 'Certified.pdf'))).body
     const cert = await issue(manager, 'sample', s.id)
     const refused = await manager.post(`/api/datasheets/${sheet.id}/withdraw`, { reason: 'Trying anyway' })
