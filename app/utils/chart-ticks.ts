@@ -13,10 +13,16 @@ export function tickText(v: number): string {
   return short(v)
 }
 
-/** On a logarithmic axis only 1, 2 and 5 × 10ⁿ are labelled; the other grid lines stay unlabelled. */
-export function logTickText(v: number): string {
-  const mantissa = Number((v / 10 ** Math.floor(Math.log10(v) + 1e-9)).toPrecision(3))
-  return mantissa === 1 || mantissa === 2 || mantissa === 5 ? tickText(v) : ''
+const leading = (v: number) => Number((v / 10 ** Math.floor(Math.log10(v) + 1e-9)).toPrecision(3))
+const major = (v: number) => [1, 2, 5].includes(leading(v))
+
+/**
+ * On a logarithmic axis only 1, 2 and 5 × 10ⁿ are labelled, the other grid lines stay
+ * unlabelled; on an axis spanning too little for three such labels, every tick is labelled.
+ */
+export function logTickText(v: number, all: readonly number[] = []): string {
+  if (all.length && all.filter(major).length < 3) return tickText(v)
+  return major(v) ? tickText(v) : ''
 }
 
 /**
@@ -34,7 +40,7 @@ export function withReadableTicks<T extends ChartConfiguration>(config: T): T {
       autoSkip: true,
       autoSkipPadding: 12,
       maxRotation: 0,
-      ...(category ? {} : { maxTicksLimit: id === 'x' ? 8 : 7, callback: (v: number | string) => (typeof v === 'number' ? (log ? logTickText(v) : tickText(v)) : v) }),
+      ...(category ? {} : { maxTicksLimit: id === 'x' ? 8 : 7, callback: (v: number | string, _i: number, ticks: { value: number }[]) => (typeof v === 'number' ? (log ? logTickText(v, ticks.map((t) => t.value)) : tickText(v)) : v) }),
       ...s.ticks,
     }
   }

@@ -105,18 +105,37 @@ export function ghsDiamondVectors(code: Pictogram, x: number, y: number, size: n
   const inset = border / 2 / Math.SQRT2 / size
   const diamond: P[] = [[0.5, inset], [1 - inset, 0.5], [0.5, 1 - inset], [inset, 0.5]]
   const out: Record<string, unknown>[] = [{ type: 'polyline', points: diamond.map(at), closePath: true, color: WHITE, lineColor: GHS_RED, lineWidth: border, lineJoin: 'miter' }]
+  // Filled shapes are joined into one path per run of one colour, so a sheet of labels carries a
+  // few vectors per pictogram rather than dozens (pdfmake's cost grows with each vector).
+  const r = (v: number) => Math.round(v * 100) / 100
+  let run: { fill: string; d: string } | null = null
+  const flush = () => {
+    if (run) out.push({ type: 'path', d: run.d, color: run.fill })
+    run = null
+  }
+  const fillPath = (fill: string, d: string) => {
+    if (run && run.fill !== fill) flush()
+    run ??= { fill, d: '' }
+    run.d += d
+  }
   for (const s of SYMBOLS[code]) {
-    if ('poly' in s) out.push({ type: 'polyline', points: s.poly.map(at), closePath: true, color: s.fill ?? BLACK, lineColor: s.fill ?? BLACK, lineWidth: 0.1 })
-    else if ('ring' in s) {
+    if ('poly' in s) {
+      const pts = s.poly.map(at)
+      fillPath(s.fill ?? BLACK, `M${pts.map((p) => `${r(p.x)} ${r(p.y)}`).join('L')}Z`)
+    } else if ('ring' in s) {
+      flush()
       const c = at(s.ring)
       out.push({ type: 'ellipse', x: c.x, y: c.y, r1: s.r * size, r2: s.r * size, color: WHITE, lineColor: BLACK, lineWidth: s.width * size })
     } else if ('circle' in s) {
       const c = at(s.circle)
-      out.push({ type: 'ellipse', x: c.x, y: c.y, r1: s.r * size, r2: (s.ry ?? s.r) * size, color: s.fill ?? BLACK })
+      const [rx, ry] = [r(s.r * size), r((s.ry ?? s.r) * size)]
+      fillPath(s.fill ?? BLACK, `M${r(c.x - rx)} ${r(c.y)}A${rx} ${ry} 0 1 0 ${r(c.x + rx)} ${r(c.y)}A${rx} ${ry} 0 1 0 ${r(c.x - rx)} ${r(c.y)}Z`)
     } else {
+      flush()
       const [a, b] = s.line.map(at)
       out.push({ type: 'line', x1: a!.x, y1: a!.y, x2: b!.x, y2: b!.y, lineWidth: s.width * size, lineColor: s.color ?? BLACK, lineCap: 'round' })
     }
   }
+  flush()
   return out
 }

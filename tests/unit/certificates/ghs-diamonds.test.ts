@@ -22,7 +22,7 @@ describe('GHS pictograms drawn as diamonds', () => {
     expect(symbol.some((s) => s.color === '#000000' || s.lineColor === '#000000')).toBe(true)
     // Every point of the symbol lies inside the diamond (|dx| + |dy| within half the size).
     for (const s of symbol) {
-      const pts = s.points ?? (s.type === 'line' ? [{ x: s.x1, y: s.y1 }, { x: s.x2, y: s.y2 }] : [{ x: s.x, y: s.y }])
+      const pts = s.type === 'path' ? [...s.d.matchAll(/(-?[\d.]+) (-?[\d.]+)(?=[LZA]|$)/g)].map((m: RegExpMatchArray) => ({ x: Number(m[1]), y: Number(m[2]) })) : (s.points ?? (s.type === 'line' ? [{ x: s.x1, y: s.y1 }, { x: s.x2, y: s.y2 }] : [{ x: s.x, y: s.y }]))
       for (const p of pts) expect(Math.abs(p.x - 110) + Math.abs(p.y - 210)).toBeLessThan(size / 2 - size / 12)
     }
   })

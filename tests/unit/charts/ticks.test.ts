@@ -13,11 +13,15 @@ describe('readable chart ticks', () => {
     const shown = [1000, 2000, 3000, 5000, 7000, 9000, 10000, 20000].map(logTickText)
     expect(shown).toEqual(['1000', '2000', '', '5000', '', '', '10k', '20k'])
   })
+  it('labels every tick of a log axis spanning less than a decade (200 to 500 eV)', () => {
+    const ticks = [200, 300, 400, 500]
+    expect(ticks.map((t) => logTickText(t, ticks))).toEqual(['200', '300', '400', '500'])
+  })
   it('keeps the tick settings of a chart and adds the shared ones to every axis', () => {
     const c = withReadableTicks({ type: 'line', data: { datasets: [] }, options: { scales: { y: { type: 'logarithmic', ticks: { color: 'red' } } } } } as any)
     const y = (c.options as any).scales.y.ticks
     expect(y).toMatchObject({ color: 'red', autoSkip: true, maxRotation: 0 })
-    expect(y.callback(3000)).toBe('')
+    expect(y.callback(3000, 2, [1000, 2000, 3000, 5000, 10000].map((value) => ({ value })))).toBe('')
     expect((c.options as any).scales.x.ticks.maxRotation).toBe(0)
   })
 })
