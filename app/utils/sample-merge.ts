@@ -32,11 +32,14 @@ export function clashes(base: SampleFormState, mine: SampleFormState, theirs: Sa
 }
 
 /** Their version with the fields in `keepMine` taken from mine. */
+// Copies go through JSON: the states may be reactive proxies, which structuredClone refuses.
+const copy = <T>(v: T): T => JSON.parse(JSON.stringify(v)) as T
+
 export function merged(mine: SampleFormState, theirs: SampleFormState, keepMine: ReadonlySet<string>): SampleFormState {
-  const out = structuredClone(theirs) as unknown as Record<string, unknown>
+  const out = copy(theirs) as unknown as Record<string, unknown>
   for (const f of keepMine) {
     if (f === 'composition') {
-      out.components = structuredClone(mine.components)
+      out.components = copy(mine.components)
       out.basis = mine.basis
     } else out[f] = (mine as unknown as Record<string, unknown>)[f]
   }

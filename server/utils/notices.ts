@@ -77,12 +77,14 @@ export async function runDailyNotices(): Promise<{ recertification: number; over
   const overdueRows = await db('sample_checkouts as k')
     .join('samples as s', 's.id', 'k.sample_id')
     .leftJoin('users as u', 'u.id', 'k.checked_out_by')
+    .leftJoin('users as h', 'h.id', 'k.holder_user_id')
     .whereNull('k.checked_in_at')
     .whereRaw('k.due_back < current_date')
-    .select('k.id', 'k.holder', 'k.run', 'k.due_back', 's.code', 's.name', 'u.name as by_name', 'u.email as by_email', 'u.active as by_active')
+    .select('k.id', 'k.holder', 'k.run', 'k.due_back', 's.code', 's.name', 'u.name as by_name', 'u.email as by_email', 'u.active as by_active', 'h.email as holder_email', 'h.active as holder_active')
   let overdue = 0
   for (const k of overdueRows) {
-    const to = [...new Set([...(k.by_email && k.by_active ? [k.by_email as string] : []), ...managers])]
+    // The holder too, when the holder is a person of the lab.
+    const to = [...new Set([...(k.by_email && k.by_active ? [k.by_email as string] : []), ...(k.holder_email && k.holder_active ? [k.holder_email as string] : []), ...managers])]
     const mail = overdueMail({ code: k.code, name: k.name, holder: k.holder, run: k.run, dueBack: k.due_back, checkedOutBy: k.by_name })
     overdue += (await sendOnce('checkout_overdue', [`${k.id}:${k.due_back}`], to, () => mail)).length
   }

@@ -84,6 +84,16 @@ describe('the daily notices', () => {
     expect(allMail().filter((m) => m.subject.startsWith(`Overdue: ${s.code}`))).toHaveLength(1)
   })
 
+  it('tells the holder too when a check-out to a person of the lab is overdue', async () => {
+    const s = await createSample(c.manager, { name: `Held too long ${unique()}` })
+    const scientist = (await c.technician.get('/api/custody/people')).body.items.find((p: { role: string }) => p.role === 'scientist')
+    expect((await c.technician.post(`/api/samples/${s.id}/custody`, { action: 'check-out', version: 1, holder: { userId: scientist.id }, run: 'Run 26-300', dueBack: dayFromNow(1) })).status).toBe(201)
+    await testDb()('sample_checkouts').where({ sample_id: s.id }).update({ due_back: testDb().raw('current_date - 2') })
+    await runNotices()
+    const mail = await waitForMail('scientist@larchmere-lab.example', new RegExp(`Overdue: ${s.code}`))
+    expect(mail.to).toEqual(expect.arrayContaining(['scientist@larchmere-lab.example', TECHNICIAN, MANAGER]))
+  })
+
   it('sends a certificate notice that did not go out at issue, once', async () => {
     const s = await certifiableSample(c.manager)
     const cert = await issue(c.manager, 'sample', s.id)
