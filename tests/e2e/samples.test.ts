@@ -73,7 +73,8 @@ describe('the sample registry in the browser', () => {
     await page.waitForSelector('[data-testid=upload-progress][aria-valuenow="100"]')
     await expect(page.getByTestId('upload-message').innerText()).resolves.toContain('is stored')
     await expect(page.getByTestId('datasheet-list').innerText()).resolves.toContain(`coa-${tag}.pdf`)
-    await expect(page.getByTestId('history').innerText()).resolves.toContain('Datasheet added')
+    // The history reloads after the list: wait for it rather than read it at once.
+    await page.getByTestId('history').getByText('Datasheet added').waitFor()
     await snap(page, 'sample-page-desktop')
     await context.close()
   })
