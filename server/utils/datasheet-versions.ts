@@ -16,7 +16,7 @@ export async function receiveDatasheet(event: H3Event, user: User, sample: { id:
   try {
     const datasheetId = randomUUID()
     const key = `datasheets/${sample.id}/${datasheetId}`
-    await storeUpload(file, key)
+    await storeUpload(event, file, key)
     try {
       return await useDb().transaction(async (trx) => {
         if (replaces) {

@@ -111,29 +111,14 @@ export function discardUpload(file: ReceivedFile): Promise<void> {
 
 /**
  * Puts a received file into the object store under `key`. When the store fails, any part of the
- * object that may have landed is removed and the caller gets a 502: nothing to point at, nothing left.
+ * object that may have landed is removed and the caller gets a 502 (or 503 when the store is
+ * silent): nothing to point at, nothing left.
  */
-export async function storeUpload(file: ReceivedFile, key: string): Promise<void> {
-  const store = useObjectStore()
-  try {
-    const bucket = await useBucket()
-    await store.putObject(bucket, key, createReadStream(file.tmpPath), file.size, {
-      'Content-Type': DATASHEET_KINDS[file.kind].contentType,
-      'Content-Disposition': contentDisposition(file.originalName),
-    })
-  } catch {
-    await removeStoredObject(key)
-    throw createError({ statusCode: 502, statusMessage: 'Bad Gateway', message: 'The file store did not accept the file; nothing was saved. Try again shortly.' })
-  }
-}
-
-/** Removes an object, ignoring a store that is down or an object that is not there. */
-export async function removeStoredObject(key: string): Promise<void> {
-  try {
-    await useObjectStore().removeObject(await useBucket(), key)
-  } catch {
-    // the store is unreachable or never had it; there is nothing more we can do from here
-  }
+export async function storeUpload(event: H3Event, file: ReceivedFile, key: string): Promise<void> {
+  await putObjectTimed(event, key, createReadStream(file.tmpPath), file.size, {
+    'Content-Type': DATASHEET_KINDS[file.kind].contentType,
+    'Content-Disposition': contentDisposition(file.originalName),
+  }, () => createError({ statusCode: 502, statusMessage: 'Bad Gateway', message: 'The file store did not accept the file; nothing was saved. Try again shortly.' }))
 }
 
 /** A datasheet as the API answers it. */
