@@ -10,7 +10,7 @@ describe('readable chart ticks', () => {
     expect(tickText(0)).toBe('0')
   })
   it('labels only 1, 2 and 5 × 10ⁿ on a logarithmic axis, so 7 000 never sits under 10 000', () => {
-    const shown = [1000, 2000, 3000, 5000, 7000, 9000, 10000, 20000].map(logTickText)
+    const shown = [1000, 2000, 3000, 5000, 7000, 9000, 10000, 20000].map((v) => logTickText(v))
     expect(shown).toEqual(['1000', '2000', '', '5000', '', '', '10k', '20k'])
   })
   it('labels every tick of a log axis spanning less than a decade (200 to 500 eV)', () => {
