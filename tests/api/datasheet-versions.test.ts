@@ -34,7 +34,9 @@ describe('datasheet versions', () => {
     expect(r.body).toMatchObject({ version: 2, replacesId: v1.id, replacedAt: null, fileName: 'Analysis rev B.pdf', sha256: sha(pdf('second')) })
     const listed = (await c.technician.get(`/api/samples/${s.id}`)).body.datasheets
     expect(listed.map((d: any) => [d.id, d.version, !!d.replacedAt])).toEqual([[r.body.id, 2, false], [v1.id, 1, true]])
-    expect((await c.auditor.get(`/api/datasheets/${v1.id}/download`)).status).toBe(302)
+    const old = await c.auditor.get(`/api/datasheets/${v1.id}/download`)
+    expect(old.status).toBe(200)
+    expect(sha(Buffer.from(old.body as Buffer))).toBe(sha(pdf('first')))
     expect(await objectsUnder(`datasheets/${s.id}/`)).toHaveLength(2)
     const audit = await testDb()('audit_log').where({ entity_id: s.id, action: 'sample.datasheet-replaced' })
     expect(audit).toHaveLength(1)
