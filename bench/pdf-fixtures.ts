@@ -61,7 +61,7 @@ export function speciesCertificate() {
 export function labels(n: number, layout: 'sheet' | 'single') {
   const content = Array.from({ length: n }, (_, i) => {
     const s = stock[i % stock.length]!
-    return labelContent({ ...s, code: `S-2026-${String(i + 1).padStart(6, '0')}` }, BASE)
+    return labelContent({ ...s, code: `S-2026-${String(i + 1).padStart(6, '0')}`, place: s.location }, BASE)
   })
   return labelsDocument(content, layout, LAB)
 }

@@ -14,6 +14,7 @@ export const NAVIGATION: NavItem[] = [
   { to: '/species/registry', label: 'Recorded species', capability: 'lookUpSpecies' },
   { to: '/certificates', label: 'Certificates', capability: 'readCertificates' },
   { to: '/scan', label: 'Scan', capability: 'custody' },
+  { to: '/checkouts', label: 'Check-outs', capability: 'custody' },
   { to: '/inventory', label: 'Sources', capability: 'readInventory' },
   { to: '/audit', label: 'Audit trail', capability: 'readAudit' },
   { to: '/people', label: 'People', capability: 'managePeople' },

@@ -1,4 +1,5 @@
 import jsQR from 'jsqr'
+import { decodeAll } from '#shared/labels/multi-decode'
 
 /** The text of the first QR code found in a frame of pixels, or null. */
 export function decodeFrame(image: ImageData, thorough = false): string | null {
@@ -30,6 +31,22 @@ export async function decodePhoto(file: Blob): Promise<string | null> {
   } finally {
     bitmap.close()
   }
+}
+
+/**
+ * Every QR code in a photo (a sheet of labels, several containers side by side), each once.
+ * Falls back to the single-code reading at several scales when the tiled search finds none.
+ */
+export async function decodePhotoAll(file: Blob): Promise<string[]> {
+  const bitmap = await createImageBitmap(file)
+  try {
+    const all = decodeAll(pixels(bitmap, bitmap.width, bitmap.height, 2000))
+    if (all.length) return all
+  } finally {
+    bitmap.close()
+  }
+  const one = await decodePhoto(file)
+  return one ? [one] : []
 }
 
 /** One frame of a playing video, scaled down for the decoder. */

@@ -13,6 +13,7 @@ import { fitLines, mm, placedText } from './layout'
 import { qrPathVector } from './qr'
 import { textWidth } from './fonts'
 import { trefoilVectors } from './trefoil'
+import { ghsDiamondVectors } from './ghs-diamonds'
 
 /** Label geometry, mm. */
 export const LABEL = { width: 50, height: 25, padding: 2, qr: 21, textX: 23.5 } as const
@@ -25,24 +26,21 @@ const TEXT_WIDTH = mm(LABEL.width - LABEL.padding - LABEL.textX)
 const RED = '#b3121b'
 
 const NAME_LINE = 2.6
-const SPECIES_LINE = 2.9
-const PICTOGRAM_ROW = 2.8
+const COMPOSITION_LINE = 2.4
+const PLACE_LINE = 2.2
+const DIAMOND_GAP = 0.3
+// Diamond sizes tried, largest first (mm): the largest that lets every pictogram show wins.
+const DIAMOND_SIZES = [5.5, 4.8, 4.2, 3.6, 3.2, 2.8]
 
-/** Pictogram code boxes flowed into rows across the text column (x and width in points). */
-function pictogramRows(codes: readonly string[], size: number) {
-  const placed: { code: string; x: number; w: number; row: number }[] = []
-  let x = 0
-  let row = 0
-  for (const code of codes) {
-    const w = textWidth(code, size, 'Inter', true) + mm(0.9)
-    if (x > 0 && x + w > TEXT_WIDTH) {
-      x = 0
-      row++
-    }
-    placed.push({ code, x, w, row })
-    x += w + mm(0.7)
+/** The diamond size (mm) and rows for `count` pictograms within `height` mm of the text column. */
+function diamondGrid(count: number, height: number) {
+  const width = LABEL.width - LABEL.padding - LABEL.textX
+  for (const d of DIAMOND_SIZES) {
+    const perRow = Math.max(1, Math.floor((width + DIAMOND_GAP) / (d + DIAMOND_GAP)))
+    const rows = Math.ceil(count / perRow)
+    if (rows * (d + DIAMOND_GAP) <= height || d === DIAMOND_SIZES.at(-1)) return { d, perRow, rows: count ? rows : 0 }
   }
-  return { placed, rows: codes.length ? row + 1 : 0, size }
+  throw new Error('unreachable')
 }
 
 /** The top-left corner (mm) of the i-th label on its sheet. */
@@ -69,29 +67,40 @@ function drawLabel(label: LabelContent, xMm: number, yMm: number, guide: boolean
   const code = fitLines(label.code, TEXT_WIDTH, 7.5, 1, 'Mono', true)[0]!
   nodes.push(placedText(code, tx, y + mm(2.4), { size: 7.5, bold: true, family: 'Mono' }))
 
-  // Every pictogram must show, so they get their rows first (smaller type when they need more
-  // than two); the species and then the name's second line give way when space runs short.
+  // Every pictogram, every component and the place must show: the pictograms get the space
+  // they need first (smaller diamonds when they need more), then the composition (one line, or
+  // two in smaller type), the place; the name gets what is left, one line at least.
   const bottomLimit = label.radiation || label.otherCautions.length ? LABEL.height - LABEL.padding - 4.9 : LABEL.height - LABEL.padding
-  let boxes = pictogramRows(label.pictograms, 5.2)
-  if (boxes.rows > 2) boxes = pictogramRows(label.pictograms, 4.6)
-  const free = bottomLimit - 5.9 - boxes.rows * PICTOGRAM_ROW
-  const showSpecies = !!label.mainSpecies && free >= NAME_LINE + SPECIES_LINE
-  const nameLines = Math.max(1, Math.min(2, Math.floor((free - (showSpecies ? SPECIES_LINE : 0)) / NAME_LINE)))
+  let compSize = 5.8
+  let composition = label.composition ? fitLines(label.composition, TEXT_WIDTH, compSize, 1) : []
+  if (label.composition && textWidth(label.composition, compSize) > TEXT_WIDTH) {
+    compSize = 5.2
+    composition = fitLines(label.composition, TEXT_WIDTH, compSize, 2)
+  }
+  const place = label.place ? fitLines(label.place, TEXT_WIDTH, 5.2, 1) : []
+  const fixed = composition.length * COMPOSITION_LINE + place.length * PLACE_LINE
+  const minName = NAME_LINE
+  const grid = diamondGrid(label.pictograms.length, bottomLimit - 5.9 - fixed - minName)
+  const diamondsHeight = grid.rows * (grid.d + DIAMOND_GAP)
+  const nameLines = Math.max(1, Math.min(2, Math.floor((bottomLimit - 5.9 - fixed - diamondsHeight) / NAME_LINE)))
   let lineY = 5.9
   for (const line of fitLines(label.name, TEXT_WIDTH, 6.5, nameLines, 'Inter', true)) {
     nodes.push(placedText(line, tx, y + mm(lineY), { size: 6.5, bold: true }))
     lineY += NAME_LINE
   }
-  if (showSpecies) {
-    nodes.push(placedText(fitLines(label.mainSpecies!, TEXT_WIDTH, 6.5, 1)[0]!, tx, y + mm(lineY + 0.3), { size: 6.5 }))
-    lineY += SPECIES_LINE
+  for (const line of composition) {
+    nodes.push(placedText(line, tx, y + mm(lineY + 0.1), { size: compSize }))
+    lineY += COMPOSITION_LINE
   }
-  for (const b of boxes.placed) {
-    const bx = tx + b.x
-    const by = y + mm(lineY + 0.5) + b.row * mm(PICTOGRAM_ROW)
-    vectors.push({ type: 'rect', x: bx, y: by, w: b.w, h: mm(2.4), r: mm(0.4), lineWidth: 0.6, lineColor: RED })
-    nodes.push(placedText(b.code, bx + mm(0.45), by + mm(0.45), { size: boxes.size, bold: true, color: RED }))
+  for (const line of place) {
+    nodes.push(placedText(line, tx, y + mm(lineY + 0.1), { size: 5.2, color: '#333333' }))
+    lineY += PLACE_LINE
   }
+  label.pictograms.forEach((code, i) => {
+    const col = i % grid.perRow
+    const row = Math.floor(i / grid.perRow)
+    vectors.push(...ghsDiamondVectors(code, tx + mm(col * (grid.d + DIAMOND_GAP)), y + mm(lineY + 0.2 + row * (grid.d + DIAMOND_GAP)), mm(grid.d)))
+  })
 
   const bottom = y + mm(LABEL.height - LABEL.padding)
   // The bottom 4.8 mm: the trefoil with RADIOACTIVE and the nuclide, or a caution in words.

@@ -28,7 +28,8 @@ export async function certifiableSubject(trx: Knex.Transaction, type: SubjectTyp
     if (!sample.recertifyBy) refuse('Give the sample a re-certify-by date first: it becomes the period of validity')
     const today = new Date().toISOString().slice(0, 10)
     if (sample.recertifyBy <= today) refuse('The re-certify-by date has passed: set the next one before issuing')
-    const sheets = await trx('datasheets').where({ sample_id: id }).orderBy('uploaded_at').select('original_name', 'sha256')
+    // The current version of each datasheet: neither replaced nor withdrawn.
+    const sheets = await trx('datasheets').where({ sample_id: id }).whereNull('replaced_at').whereNull('withdrawn_at').orderBy('uploaded_at').select('original_name', 'sha256')
     const datasheets = sheets.map((d) => ({ fileName: d.original_name, sha256: d.sha256 }))
     const input = { ...sample, form: sample.form as SampleForm, location: sample.location ? { path: sample.location.path, name: sample.location.name } : null }
     return { label: `${sample.code} ${sample.name}`, build: (ctx) => samplePayload(input, datasheets, ctx) }

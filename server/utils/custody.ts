@@ -2,7 +2,7 @@ import type { H3Event } from 'h3'
 import type { Knex } from 'knex'
 import type { User } from 'lucia'
 import { deriveSample } from '#shared/samples/derived'
-import type { CustodyData } from '#shared/schemas/custody'
+import type { CheckOutHolderData, CustodyData } from '#shared/schemas/custody'
 import type { CustodyEventRow, SampleCheckoutRow } from '#shared/types/db'
 
 const KIND = { move: 'moved', 'check-out': 'checked_out', 'check-in': 'checked_in', consume: 'consumed', condition: 'condition' } as const
@@ -11,8 +11,30 @@ const KIND = { move: 'moved', 'check-out': 'checked_out', 'check-in': 'checked_i
 const roundMg = (v: number) => Math.round(v * 1e6) / 1e6
 
 function checkoutOut(k: SampleCheckoutRow & { by_name?: string | null }) {
-  return { id: k.id, holder: k.holder, run: k.run, dueBack: k.due_back, checkedOutAt: k.checked_out_at, checkedOutBy: k.by_name ?? null }
+  return {
+    id: k.id,
+    holder: k.holder,
+    holderUserId: k.holder_user_id ?? null,
+    holderInstitution: k.holder_institution ?? null,
+    run: k.run,
+    dueBack: k.due_back,
+    checkedOutAt: k.checked_out_at,
+    checkedOutBy: k.by_name ?? null,
+  }
 }
+
+/** Who takes a sample: an active person of the lab by id, or an external user as given. */
+async function resolveHolder(trx: Knex.Transaction, h: CheckOutHolderData) {
+  if ('userId' in h) {
+    const person = await trx('users').where({ id: h.userId, active: true }).first('id', 'name')
+    if (!person) invalidField('holder.userId', 'Choose an active person from the list')
+    return { userId: person.id, name: person.name, institution: null }
+  }
+  return { userId: null, name: h.name, institution: h.institution }
+}
+
+// A mass as the technician reads it on a balance: at most six significant digits, no trailing zeros.
+const mgText = (v: number) => `${Number(v.toPrecision(6))} mg`
 
 /** A sample's custody: the open check-out (if any), the area used so far, and the events, newest first. */
 export async function custodyState(db: Knex | Knex.Transaction, sampleId: string) {
@@ -37,8 +59,8 @@ function conflict(message: string, data: Record<string, unknown>): never {
 
 /**
  * Applies one custody action to a sample locked for update, against the version the technician
- * saw: a stale version, a retired sample, a second check-out or a consumption beyond what is
- * left is refused with the current state. Writes the sample, the custody event and the audit
+ * saw: a stale version, a retired sample or a second check-out is refused (409) with the current
+ * state; a consumption beyond what is left is a 400 that says how much is left. Writes the sample, the custody event and the audit
  * row in the caller's transaction; answers the new bench state.
  */
 export async function applyCustody(trx: Knex.Transaction, event: H3Event, user: User, sampleId: string, a: CustodyData) {
@@ -50,6 +72,7 @@ export async function applyCustody(trx: Knex.Transaction, event: H3Event, user: 
   const open = await trx('sample_checkouts').where({ sample_id: sampleId }).whereNull('checked_in_at').forUpdate().first()
   const changes: Record<string, unknown> = {}
   let details: Record<string, unknown> = { note: a.note ?? null }
+  let columns: { holder_user_id?: string | null; holder_name?: string; holder_institution?: string | null; due_back?: string } = {}
   const placePath = async (id: string | null) => (id ? ((await placesById(trx)).get(id)?.path ?? null) : null)
 
   if (a.action === 'move' || (a.action === 'check-in' && a.locationId)) {
@@ -63,22 +86,31 @@ export async function applyCustody(trx: Knex.Transaction, event: H3Event, user: 
     if (open) conflict('This sample is already checked out', { checkout: checkoutOut(open), ...(await current()) })
     if (before.status === 'quarantined' || before.status === 'depleted') conflict(before.status === 'quarantined' ? 'A quarantined sample cannot be checked out: release it first' : 'A depleted sample cannot be checked out', { reason: before.status, ...(await current()) })
     if (a.dueBack < new Date().toISOString().slice(0, 10)) invalidField('dueBack', 'The due-back day is in the past')
-    const [k] = await trx('sample_checkouts').insert({ sample_id: sampleId, holder: a.holder, run: a.run, due_back: a.dueBack, checked_out_by: user.id }).returning('id')
+    const who = await resolveHolder(trx, a.holder)
+    const [k] = await trx('sample_checkouts')
+      .insert({ sample_id: sampleId, holder: who.name, holder_user_id: who.userId, holder_institution: who.institution, run: a.run, due_back: a.dueBack, checked_out_by: user.id })
+      .returning('id')
     changes.status = 'in_use'
-    details = { ...details, checkoutId: k!.id, holder: a.holder, run: a.run, dueBack: a.dueBack, statusBefore: before.status }
+    columns = { holder_user_id: who.userId, holder_name: who.name, holder_institution: who.institution, due_back: a.dueBack }
+    details = { ...details, checkoutId: k!.id, holder: who.name, holderUserId: who.userId, holderInstitution: who.institution, run: a.run, dueBack: a.dueBack, statusBefore: before.status }
   }
   if (a.action === 'check-in') {
     if (!open) conflict('This sample is not checked out', await current())
     await trx('sample_checkouts').where({ id: open.id }).update({ checked_in_at: trx.fn.now(), checked_in_by: user.id })
     if (before.status === 'in_use') changes.status = 'available'
-    details = { ...details, checkoutId: open.id, holder: open.holder, run: open.run, dueBack: open.due_back }
+    details = { ...details, checkoutId: open.id, holder: open.holder, holderUserId: open.holder_user_id ?? null, holderInstitution: open.holder_institution ?? null, run: open.run, dueBack: open.due_back }
   }
   if (a.action === 'consume') {
     const areal = deriveSample(before).arealDensity
     const usedMg = a.unit === 'mg' ? a.amount : areal ? roundMg((a.amount * areal.value) / 1000) : null
     let after: number | null = before.massMg
     if (before.massMg !== null && usedMg !== null) {
-      if (usedMg > before.massMg + 1e-9) conflict('That is more than the mass on record', { remainingMg: before.massMg, usedMg, ...(await current()) })
+      // More than is left is a mistake in what was typed, not a clash with someone else: a 400
+      // that says how much is left (a value from the record, never the input).
+      if (usedMg > before.massMg + 1e-9) {
+        const message = `Only ${mgText(before.massMg)} left`
+        throw createError({ statusCode: 400, statusMessage: 'Invalid input', message, data: { remainingMg: before.massMg, usedMg, issues: [{ path: 'amount', message }] } })
+      }
       after = Math.max(0, roundMg(before.massMg - usedMg))
       changes.mass_mg = after
       if (after === 0) changes.status = 'depleted'
@@ -104,7 +136,7 @@ export async function applyCustody(trx: Knex.Transaction, event: H3Event, user: 
     .returning('id')
   if (!row) conflict('Someone changed this sample after you opened it', await current())
   const kind = KIND[a.action]
-  await trx('custody_events').insert({ sample_id: sampleId, kind, details: JSON.stringify(details) as never, by: user.id })
+  await trx('custody_events').insert({ sample_id: sampleId, kind, details: JSON.stringify(details) as never, by: user.id, ...columns })
   const after = (await findSample(trx, sampleId))!
   await writeAudit(trx, event, { action: `sample.custody.${kind.replace('_', '-')}`, entityType: 'sample', entityId: sampleId, before, after: { ...after, custody: { kind, ...details } } })
   return { sample: after, custody: await custodyState(trx, sampleId), licenceWarnings: licence }

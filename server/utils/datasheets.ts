@@ -147,14 +147,18 @@ export function datasheetRecord(d: DatasheetRow & { uploader_name?: string | nul
     sha256: d.sha256,
     uploadedAt: d.uploaded_at,
     uploadedBy: d.uploader_name ?? null,
+    version: d.version ?? 1,
+    replacesId: d.replaces_id ?? null,
+    replacedAt: d.replaced_at ?? null,
   }
 }
 
-/** A sample record with its datasheets, newest first. */
+/** A sample record with its datasheets, newest first: current and replaced ones, never withdrawn ones. */
 export async function withDatasheets<T extends { id: string }>(db: Knex | Knex.Transaction, record: T) {
   const rows = await db('datasheets as d')
     .leftJoin('users as u', 'u.id', 'd.uploaded_by')
     .where('d.sample_id', record.id)
+    .whereNull('d.withdrawn_at')
     .orderBy('d.uploaded_at', 'desc')
     .select('d.*', 'u.name as uploader_name')
   return { ...record, datasheets: rows.map((r) => datasheetRecord(r as DatasheetRow & { uploader_name: string | null })) }

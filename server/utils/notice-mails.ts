@@ -44,16 +44,31 @@ export function certificateRevokedMail(c: { id: string; number: string; subjectL
   }
 }
 
-/** To the managers: samples whose re-certify-by date is within 30 days (or already past). */
-export function recertificationMail(samples: { id: string; code: string; name: string; recertifyBy: string }[]): Mail {
+/**
+ * To the managers: samples whose re-certify-by date is past (overdue) or within 30 days, in two
+ * separate lists, overdue first. `today` is the database's date, the one the query used.
+ */
+export function recertificationMail(samples: { id: string; code: string; name: string; recertifyBy: string }[], today: string): Mail {
   const list = `${base()}/samples?due=30`
   const f = footer()
+  // On or before today is overdue, as the sample list's "overdue" filter counts it.
+  const overdue = samples.filter((s) => s.recertifyBy <= today)
+  const soon = samples.filter((s) => s.recertifyBy > today)
   const line = (s: (typeof samples)[number]) => `${s.code}  ${s.name}  re-certify by ${formatDay(s.recertifyBy)}`
+  const item = (s: (typeof samples)[number]) => `<li><a href="${e(`${base()}/samples/${s.id}`)}">${e(s.code)}</a> ${e(s.name)}: re-certify by ${e(formatDay(s.recertifyBy))}</li>`
+  const sections = [
+    { title: 'Overdue: the re-certify-by date has passed', rows: overdue },
+    { title: 'Due within 30 days', rows: soon },
+  ].filter((x) => x.rows.length)
+  const subject = overdue.length
+    ? `Re-certification overdue for ${overdue.length} sample${overdue.length === 1 ? '' : 's'}${soon.length ? `, due for ${soon.length} more` : ''}`
+    : samples.length === 1
+      ? `Re-certification due: ${samples[0]!.code}`
+      : `Re-certification due for ${samples.length} samples`
   return {
-    subject: samples.length === 1 ? `Re-certification due: ${samples[0]!.code}` : `Re-certification due for ${samples.length} samples`,
-    text: [`These samples are due for re-certification within 30 days:`, '', ...samples.map(line), '', `The list in Ionfolio: ${list}`, f.text].join('\n'),
-    html: `<p>These samples are due for re-certification within 30 days:</p>
-<ul>${samples.map((s) => `<li><a href="${e(`${base()}/samples/${s.id}`)}">${e(s.code)}</a> ${e(s.name)}: re-certify by ${e(formatDay(s.recertifyBy))}</li>`).join('')}</ul>
+    subject,
+    text: [...sections.flatMap((x) => [`${x.title}:`, '', ...x.rows.map(line), '']), `The list in Ionfolio: ${list}`, f.text].join('\n'),
+    html: `${sections.map((x) => `<p><strong>${e(x.title)}:</strong></p>\n<ul>${x.rows.map(item).join('')}</ul>`).join('\n')}
 <p><a href="${e(list)}">The list in Ionfolio</a></p>${f.html}`,
   }
 }

@@ -71,17 +71,20 @@ export async function runDailyNotices(): Promise<{ recertification: number; over
     .orderBy('code')
     .select('id', 'code', 'name', 'recertify_by')
   const byKey = new Map(due.map((s) => [`${s.id}:${s.recertify_by}`, { id: s.id, code: s.code, name: s.name, recertifyBy: s.recertify_by! }]))
-  const recertified = await sendOnce('recertification_due', [...byKey.keys()], managers, (keys) => recertificationMail(keys.map((k) => byKey.get(k)!)))
+  const today = String(((await db.raw('select current_date::text as d')) as { rows: { d: string }[] }).rows[0]!.d)
+  const recertified = await sendOnce('recertification_due', [...byKey.keys()], managers, (keys) => recertificationMail(keys.map((k) => byKey.get(k)!), today))
 
   const overdueRows = await db('sample_checkouts as k')
     .join('samples as s', 's.id', 'k.sample_id')
     .leftJoin('users as u', 'u.id', 'k.checked_out_by')
+    .leftJoin('users as h', 'h.id', 'k.holder_user_id')
     .whereNull('k.checked_in_at')
     .whereRaw('k.due_back < current_date')
-    .select('k.id', 'k.holder', 'k.run', 'k.due_back', 's.code', 's.name', 'u.name as by_name', 'u.email as by_email', 'u.active as by_active')
+    .select('k.id', 'k.holder', 'k.run', 'k.due_back', 's.code', 's.name', 'u.name as by_name', 'u.email as by_email', 'u.active as by_active', 'h.email as holder_email', 'h.active as holder_active')
   let overdue = 0
   for (const k of overdueRows) {
-    const to = [...new Set([...(k.by_email && k.by_active ? [k.by_email as string] : []), ...managers])]
+    // The holder too, when the holder is a person of the lab.
+    const to = [...new Set([...(k.by_email && k.by_active ? [k.by_email as string] : []), ...(k.holder_email && k.holder_active ? [k.holder_email as string] : []), ...managers])]
     const mail = overdueMail({ code: k.code, name: k.name, holder: k.holder, run: k.run, dueBack: k.due_back, checkedOutBy: k.by_name })
     overdue += (await sendOnce('checkout_overdue', [`${k.id}:${k.due_back}`], to, () => mail)).length
   }

@@ -2,6 +2,7 @@ import type { Knex } from 'knex'
 import type { SampleListParams } from '../../shared/schemas/samples'
 import { CLP_VARIANTS } from '../../shared/samples/ghs'
 import { countRows } from './count'
+import { parseIsotopeToken } from '../../shared/physics/notation'
 
 // The sample list's SQL, in one place for the list route, its CSV export and bench/registry.ts
 // (which times this same SQL straight through Knex). Plain imports only, no Nitro auto-imports.
@@ -37,8 +38,17 @@ const PLACE_AND_INSIDE = `array(with recursive sub as (
 export function filteredSamples(db: Knex, p: SampleListParams): Knex.QueryBuilder {
   const query = db('samples as s').leftJoin('locations as l', 'l.id', 's.location_id')
   const terms = (p.q ?? '').split(/\s+/).filter(Boolean).slice(0, 6)
-  // search_text also holds the codes and names of the sample's place and the places around it
-  for (const term of terms) query.whereRaw(`s.search_text like ? escape '\\'`, [likeTerm(term)])
+  // search_text also holds the codes and names of the sample's place and the places around it.
+  // A term naming an isotope ("Ni-58", "58Ni", "Ni58") also finds the samples holding that
+  // isotope as a component, however it is written; the text still matches too, since a place
+  // code such as B11 reads like an isotope.
+  for (const term of terms) {
+    const isotope = parseIsotopeToken(term)
+    query.where((w) => {
+      w.whereRaw(`s.search_text like ? escape '\\'`, [likeTerm(term)])
+      if (isotope) w.orWhereExists((e) => e.select(db.raw('1')).from('sample_components as c').whereRaw('c.sample_id = s.id').where({ 'c.z': isotope.z, 'c.mass_number': isotope.massNumber }))
+    })
+  }
   if (p.status === undefined) query.whereNot('s.status', 'retired')
   else if (p.status !== 'any') query.where('s.status', p.status)
   if (p.form) query.where('s.form', p.form)

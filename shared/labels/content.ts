@@ -1,6 +1,6 @@
 /**
- * What a container label says about its sample: the code and its scan URL, the name, the main
- * species or element, the GHS pictogram codes and a radiation caution. Layout is the PDF's job.
+ * What a container label says about its sample: the code and its scan URL, the name, every
+ * component, the storage place, the GHS pictograms and a radiation caution. Layout is the PDF's job.
  */
 import { classifyHazards, HAZARD_LABELS, type HazardInput } from '../samples/hazards'
 import { isotopeLabel, parseNuclide, formatNuclide } from '../samples/nuclide'
@@ -18,14 +18,18 @@ export interface LabelSampleInput {
   nuclide: string | null
   hazardStatements: string[]
   components: { z: number; massNumber: number | null; fraction: number; basis: 'atom' | 'mass'; enrichmentPercent: number | null }[]
+  /** where it is kept: the place's path of codes and its name */
+  place?: { path: string; name: string } | null
 }
 
 export interface LabelContent {
   code: string
   url: string
   name: string
-  /** e.g. "⁵⁸Ni 99.6 %" or "Ca · CaF₂" */
-  mainSpecies: string | null
+  /** every component in recorded order, then the formula: "⁵⁸Ni 99.6 %", "⁷Li 99.9 % + F · LiF" */
+  composition: string | null
+  /** the storage place, its own code and name ("C3 (Target cabinet)"), or null when none is recorded */
+  place: string | null
   pictograms: Pictogram[]
   /** the radiation caution: null when the sample is not radioactive */
   radiation: { nuclide: string | null } | null
@@ -45,17 +49,16 @@ export function formulaText(formula: string): string {
   return formula.replace(/(?<=[A-Za-z)\]])\d+/g, (d) => [...d].map((c) => SUB[Number(c)]).join(''))
 }
 
-// The main species: the enriched isotope if one is named (the largest share among them), else
-// the first component recorded, which the sample form lists as the element of interest
-// (UF₄ is a uranium target, TiH₂ a titanium one).
-function mainSpecies(s: LabelSampleInput): string | null {
+// Every component, in the order the sample form records them (the element of interest first:
+// UF₄ is a uranium target, TiH₂ a titanium one), each enriched isotope with its enrichment, then
+// the formula where it says more than the one element.
+function composition(s: LabelSampleInput): string | null {
   if (!s.components.length) return s.formula ? formulaText(s.formula) : null
-  const named = s.components.filter((c) => c.massNumber !== null).sort((a, b) => b.fraction - a.fraction)
-  const c = named[0] ?? s.components[0]!
-  let text = isotopeLabel(c.z, c.massNumber)
-  if (c.massNumber !== null && c.enrichmentPercent !== null) text += ` ${formatValue(c.enrichmentPercent, 4)} %`
-  const symbol = getElement(c.z)?.symbol
-  if (s.formula && s.formula !== symbol) text += ` · ${formulaText(s.formula)}`
+  let text = s.components
+    .map((c) => isotopeLabel(c.z, c.massNumber) + (c.massNumber !== null && c.enrichmentPercent !== null ? ` ${formatValue(c.enrichmentPercent, 4)} %` : ''))
+    .join(' + ')
+  const only = s.components.length === 1 ? getElement(s.components[0]!.z)?.symbol : null
+  if (s.formula && s.formula !== only) text += ` · ${formulaText(s.formula)}`
   return text
 }
 
@@ -76,7 +79,9 @@ export function labelContent(s: LabelSampleInput, baseUrl: string): LabelContent
     code: s.code,
     url: scanUrl(baseUrl, s.code),
     name: s.name,
-    mainSpecies: mainSpecies(s),
+    composition: composition(s),
+    // The innermost place is what finds the container; the whole path rarely fits a label.
+    place: s.place ? `${s.place.path.split(' › ').at(-1)} (${s.place.name})` : null,
     pictograms,
     radiation: radioactive ? { nuclide: nuclide && parseNuclide(nuclide) ? nuclide : null } : null,
     otherCautions,

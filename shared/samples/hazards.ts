@@ -7,7 +7,7 @@
  * the supplier's safety data sheet or the institution's own assessment.
  */
 import { getElement } from '../physics/index'
-import { baseHCode } from './ghs'
+import { baseHCode, canonicalHCode } from './ghs'
 import { parseNuclide } from './nuclide'
 import type { SampleForm } from './vocabulary'
 
@@ -92,8 +92,9 @@ function isBareElement(s: HazardInput): number | null {
 /** The cautions a sample calls for, in a fixed order; empty when none. */
 export function classifyHazards(s: HazardInput): Caution[] {
   const reasons: Record<HazardKind, string[]> = { radioactive: [], toxic: [], pyrophoric: [], pressurised: [] }
-  const codes = new Set(s.hazardStatements.map((c) => baseHCode(c)).filter((c): c is string => !!c))
-  const listed = (set: Set<string>) => [...codes].filter((c) => set.has(c)).sort()
+  // Matched on the GHS code a statement refines, but listed as stored: H350i stays H350i.
+  const codes = new Map(s.hazardStatements.map((c) => [canonicalHCode(c) ?? c, baseHCode(c)] as const))
+  const listed = (set: Set<string>) => [...codes].filter(([, base]) => !!base && set.has(base)).map(([c]) => c).sort()
 
   if (s.radioactive) reasons.radioactive.push(s.nuclide ? `Recorded as radioactive (${s.nuclide}).` : 'Recorded as radioactive.')
   const unstable = s.components.filter((c) => NO_STABLE_ISOTOPE(c.z)).map((c) => c.z)

@@ -142,6 +142,13 @@ export interface DatasheetRow {
   sha256: string
   uploaded_by: string | null
   uploaded_at: Date
+  /** 1 for a first upload; the replaced sheet's version + 1 for a replacement */
+  version?: number
+  replaces_id?: string | null
+  replaced_at?: Date | null
+  withdrawn_at?: Date | null
+  withdrawn_by?: string | null
+  withdrawn_reason?: string | null
 }
 
 export interface ScfCacheRow {
@@ -219,12 +226,20 @@ export interface CustodyEventRow {
   details: unknown
   by: string | null
   at: Date
+  /** Check-outs only (null on rows written before holders were people) */
+  holder_user_id?: string | null
+  holder_name?: string | null
+  holder_institution?: string | null
+  due_back?: string | null
 }
 
 export interface SampleCheckoutRow {
   id: string
   sample_id: string
   holder: string
+  /** the lab's person who holds it; null for an external user (then holder_institution is set) */
+  holder_user_id?: string | null
+  holder_institution?: string | null
   run: string
   /** DATE, as 'YYYY-MM-DD' */
   due_back: string

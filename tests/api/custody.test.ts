@@ -46,14 +46,14 @@ describe('custody actions from the bench card', () => {
 
   it('checks out once: a second check-out is refused until it is checked back in', async () => {
     const s = await createSample(c.manager)
-    const out = await act(tech, s.id, { action: 'check-out', version: 1, holder: 'Tobias Vellacott', run: 'Run 26-114', dueBack: dayFromNow(3) })
+    const out = await act(tech, s.id, { action: 'check-out', version: 1, holder: { name: 'Ilse Marwood', institution: 'Brelund Institute of Technology' }, run: 'Run 26-114', dueBack: dayFromNow(3) })
     expect(out.status).toBe(201)
     expect(out.body.sample.status).toBe('in_use')
-    expect(out.body.custody.checkout).toMatchObject({ holder: 'Tobias Vellacott', run: 'Run 26-114', dueBack: dayFromNow(3), checkedOutBy: 'Priya Lindqvist' })
-    const twice = await act(tech, s.id, { action: 'check-out', version: 2, holder: 'Someone else', run: 'Run 26-115', dueBack: dayFromNow(3) })
+    expect(out.body.custody.checkout).toMatchObject({ holder: 'Ilse Marwood', holderUserId: null, holderInstitution: 'Brelund Institute of Technology', run: 'Run 26-114', dueBack: dayFromNow(3), checkedOutBy: 'Priya Lindqvist' })
+    const twice = await act(tech, s.id, { action: 'check-out', version: 2, holder: { name: 'Someone else', institution: 'Elsewhere' }, run: 'Run 26-115', dueBack: dayFromNow(3) })
     expect(twice.status).toBe(409)
     expect(twice.body.message).toBe('This sample is already checked out')
-    expect(twice.body.data.checkout.holder).toBe('Tobias Vellacott')
+    expect(twice.body.data.checkout.holder).toBe('Ilse Marwood')
     const back = await act(tech, s.id, { action: 'check-in', version: 2, locationId: places[3]!.id, note: 'Returned intact' })
     expect(back.status).toBe(201)
     expect(back.body.sample).toMatchObject({ status: 'available', locationId: places[3]!.id })
@@ -65,11 +65,11 @@ describe('custody actions from the bench card', () => {
 
   it('refuses a check-out due back in the past, and of a quarantined sample', async () => {
     const s = await createSample(c.manager)
-    const past = await act(tech, s.id, { action: 'check-out', version: 1, holder: 'A. Person', run: 'R1', dueBack: '2020-01-01' })
+    const past = await act(tech, s.id, { action: 'check-out', version: 1, holder: { name: 'A. Person', institution: 'Somewhere' }, run: 'R1', dueBack: '2020-01-01' })
     expect(past.status).toBe(400)
     expect(past.body.data.issues[0].path).toBe('dueBack')
     const q = await createSample(c.manager, { status: 'quarantined' })
-    const r = await act(tech, q.id, { action: 'check-out', version: 1, holder: 'A. Person', run: 'R1', dueBack: dayFromNow(1) })
+    const r = await act(tech, q.id, { action: 'check-out', version: 1, holder: { name: 'A. Person', institution: 'Somewhere' }, run: 'R1', dueBack: dayFromNow(1) })
     expect(r.status).toBe(409)
     expect(r.body.message).toMatch(/quarantined/)
   })
@@ -86,8 +86,10 @@ describe('custody actions from the bench card', () => {
     const event = area.body.custody.events[0]
     expect(event.details).toMatchObject({ amount: 2, unit: 'cm2', massUsedMg: 1, arealDensityUgCm2: 500, massBeforeMg: 7, massAfterMg: 6 })
     const tooMuch = await act(tech, s.id, { action: 'consume', version: 3, amount: 6.5, unit: 'mg' })
-    expect(tooMuch.status).toBe(409)
-    expect(tooMuch.body.data).toMatchObject({ remainingMg: 6, usedMg: 6.5 })
+    expect(tooMuch.status).toBe(400)
+    expect(tooMuch.body.message).toBe('Only 6 mg left')
+    expect(tooMuch.body.data).toMatchObject({ remainingMg: 6, usedMg: 6.5, issues: [{ path: 'amount', message: 'Only 6 mg left' }] })
+    expect(await testDb()('custody_events').where({ sample_id: s.id })).toHaveLength(2)
     const all = await act(tech, s.id, { action: 'consume', version: 3, amount: 6, unit: 'mg' })
     expect(all.body.sample).toMatchObject({ massMg: 0, status: 'depleted' })
   })
@@ -106,7 +108,7 @@ describe('custody actions from the bench card', () => {
     for (const body of [
       { action: 'move', version: 2, locationId: places[0]!.id },
       { action: 'condition', version: 2, note: 'Looks fine' },
-      { action: 'check-out', version: 2, holder: 'A. Person', run: 'R1', dueBack: dayFromNow(1) },
+      { action: 'check-out', version: 2, holder: { name: 'A. Person', institution: 'Somewhere' }, run: 'R1', dueBack: dayFromNow(1) },
     ]) {
       const r = await act(tech, s.id, body)
       expect(r.status).toBe(409)

@@ -1,8 +1,11 @@
 import { describe, it, expect, beforeAll, afterAll } from 'vitest'
 import { everyone, type Client } from '../support/api'
+import { readFileSync } from 'node:fs'
+import { PNG } from 'pngjs'
+import { decodeAll } from '../../shared/labels/multi-decode'
 import { closeTestDb, testDb } from '../support/db'
 import { createSample } from '../support/samples'
-import { cropMm, inkBox, pdfPages, pdfText, renderPages, zbar } from '../support/pdf'
+import { cropMm, inkBox, longestDarkRunMm, pdfPages, pdfText, redPixels, renderPages, zbar } from '../support/pdf'
 
 let c: Awaited<ReturnType<typeof everyone>>
 let seeded: { id: string; code: string }[]
@@ -20,7 +23,8 @@ const base = () => process.env.IONFOLIO_TEST_BASE_URL!
 const slot = (i: number) => ({ x: 24 + (i % 3) * 56, y: 14.5 + Math.floor(i / 3) * 27, w: 50, h: 25 })
 
 async function labels(client: Client, sampleIds: string[], layout: 'single' | 'sheet') {
-  const r = await client.post('/api/labels', { sampleIds, layout })
+  // The test server's public address is a loopback one: printing says so first (below).
+  const r = await client.post('/api/labels', { sampleIds, layout, allowLoopback: true })
   expect(r.status, r.status === 200 ? '' : JSON.stringify(r.body)).toBe(200)
   expect(r.headers.get('content-type')).toBe('application/pdf')
   return r.body as Buffer
@@ -54,15 +58,40 @@ describe('a sheet of labels', () => {
     for (const side of ['left', 'top', 'right', 'bottom'] as const) expect(box[side], side).toBeGreaterThanOrEqual(6.35)
   })
 
-  it('prints the name, main species, pictogram codes and the radiation caution', async () => {
+  it('prints the name, every component, the place, the pictograms as red diamonds and the radiation caution', async () => {
     // The demo stock's depleted-uranium target (H300+H330 H373 H411): found by name, since
     // other tests add uranium-bearing samples of their own.
     const uranium = (await c.technician.get(`/api/samples?q=${encodeURIComponent('Depleted uranium fluoride')}&pageSize=1`)).body.items[0]
-    const text = (await pdfText(await labels(c.technician, [uranium.id], 'sheet'))).replace(/\s+/g, ' ')
+    const full = (await c.technician.get(`/api/samples/${uranium.id}`)).body
+    const pdf = await labels(c.technician, [uranium.id], 'sheet')
+    const text = (await pdfText(pdf)).replace(/\s+/g, ' ')
     expect(text).toContain(uranium.code)
     expect(text).toContain('RADIOACTIVE')
     expect(text).toContain('U-238')
-    expect(text).toMatch(/GHS06/)
+    // both components (uranium and fluorine), and where it is kept
+    expect(text).toMatch(/238\s*U 99\.8 % \+ F/)
+    expect(text).toContain(full.location.path.split(' › ').at(-1))
+    // no pictogram codes as text any more: the diamonds are drawn, with their red frames
+    expect(text).not.toMatch(/GHS0\d/)
+    const [page] = await renderPages(pdf, 200)
+    expect(redPixels(page!, 200, slot(0))).toBeGreaterThan(300)
+    expect(redPixels(page!, 200, slot(1))).toBe(0)
+  })
+
+  it('carries a 50 mm scale bar that renders 50 mm long at 100 %', async () => {
+    const [page] = await renderPages(await labels(c.technician, [seeded[0]!.id], 'sheet'), 300)
+    // The bar lies 8.5–10.5 mm from the top (server/pdf/labels.ts); its ticks are 0.5 pt wide.
+    expect(longestDarkRunMm(page!, 300, 9, 10)).toBeCloseTo(50, 0)
+  })
+
+  it('warns before printing QR codes that point at a loopback address, and notes it when printed anyway', async () => {
+    const r = await c.manager.post('/api/labels', { sampleIds: [seeded[0]!.id], layout: 'single' })
+    expect(r.status).toBe(409)
+    expect(r.body.data).toEqual({ reason: 'loopback-address', baseUrl: base() })
+    expect(r.body.message).toMatch(/loopback/)
+    await labels(c.manager, [seeded[0]!.id], 'single')
+    const [row] = await testDb()('audit_log').where({ action: 'sample.label-printed', entity_id: seeded[0]!.id }).orderBy('id', 'desc').limit(1)
+    expect(row!.after.loopbackAddress).toBe(base())
   })
 
   it('audits the printing: which samples, the layout and the print run', async () => {
@@ -112,4 +141,16 @@ describe('what labels are refused', () => {
     expect((await c.technician.post('/api/labels', { sampleIds: ['S-2026-000001'], layout: 'sheet' })).status).toBe(400)
     expect((await c.technician.post('/api/labels', { sampleIds: [seeded[0]!.id], layout: 'poster' })).status).toBe(400)
   })
+})
+
+// Last in the file: decoding a whole sheet keeps this process busy for a while, and the server
+// closes idle keep-alive connections meanwhile.
+describe('a photo of a whole sheet', () => {
+  it('finds every code of a whole sheet in one picture with the decoder of the scan page (jsQR, tiled)', async () => {
+    const chosen = seeded.slice(0, 30)
+    const [page] = await renderPages(await labels(c.technician, chosen.map((s) => s.id), 'sheet'), 150)
+    const png = PNG.sync.read(readFileSync(page!))
+    const found = decodeAll({ data: new Uint8ClampedArray(png.data.buffer, png.data.byteOffset, png.data.length), width: png.width, height: png.height })
+    expect([...found].sort()).toEqual(chosen.map((s) => `${base()}/scan/${s.code}`).sort())
+  }, 120_000)
 })

@@ -27,7 +27,7 @@ describe('the daily notices', () => {
     const later = await createSample(c.manager, { name: `Due later ${unique()}`, recertifyBy: dayFromNow(45) })
     const first = await runNotices()
     expect(first.recertification).toBeGreaterThanOrEqual(1)
-    const mail = await waitForMail(MANAGER, /Re-certification due/)
+    const mail = await waitForMail(MANAGER, /Re-certification (due|overdue)/)
     expect(mentioning(s.code)).toHaveLength(1)
     expect(mail.to).toContain(MANAGER)
     expect(mentioning(later.code)).toHaveLength(0)
@@ -39,6 +39,22 @@ describe('the daily notices', () => {
     await new Promise((r) => setTimeout(r, 300))
     expect(mentioning(s.code)).toHaveLength(1)
     expect(await testDb()('notices').where({ kind: 'recertification_due', key: `${s.id}:${s.recertifyBy}` })).toHaveLength(1)
+  })
+
+  it('lists overdue samples apart from those due within 30 days', async () => {
+    const late = await createSample(c.manager, { name: `Overdue ${unique()}`, recertifyBy: dayFromNow(-2) })
+    const soon = await createSample(c.manager, { name: `Soon ${unique()}`, recertifyBy: dayFromNow(12) })
+    await runNotices()
+    await waitForMail(MANAGER, /Re-certification overdue/)
+    const m = mentioning(late.code).find((x) => x.text.includes(soon.code))!
+    expect(m.subject).toMatch(/overdue/)
+    const overdueAt = m.text.indexOf('Overdue: the re-certify-by date has passed:')
+    const soonAt = m.text.indexOf('Due within 30 days:')
+    expect(overdueAt).toBeGreaterThanOrEqual(0)
+    expect(soonAt).toBeGreaterThan(overdueAt)
+    expect(m.text.indexOf(late.code)).toBeGreaterThan(overdueAt)
+    expect(m.text.indexOf(late.code)).toBeLessThan(soonAt)
+    expect(m.text.indexOf(soon.code)).toBeGreaterThan(soonAt)
   })
 
   it('notices again only when the re-certify-by date changes', async () => {
@@ -53,7 +69,7 @@ describe('the daily notices', () => {
 
   it('tells the technician and the managers once about a check-out past its due date', async () => {
     const s = await createSample(c.manager, { name: `Out too long ${unique()}` })
-    const out = await c.technician.post(`/api/samples/${s.id}/custody`, { action: 'check-out', version: 1, holder: 'Visiting group', run: 'Beam time 26-07', dueBack: dayFromNow(1) })
+    const out = await c.technician.post(`/api/samples/${s.id}/custody`, { action: 'check-out', version: 1, holder: { name: 'Visiting group', institution: 'Brelund University' }, run: 'Beam time 26-07', dueBack: dayFromNow(1) })
     expect(out.status).toBe(201)
     // Time passes: the check-out falls due yesterday.
     await testDb()('sample_checkouts').where({ sample_id: s.id }).update({ due_back: testDb().raw("current_date - 1") })
@@ -66,6 +82,16 @@ describe('the daily notices', () => {
     await runNotices()
     await new Promise((r) => setTimeout(r, 300))
     expect(allMail().filter((m) => m.subject.startsWith(`Overdue: ${s.code}`))).toHaveLength(1)
+  })
+
+  it('tells the holder too when a check-out to a person of the lab is overdue', async () => {
+    const s = await createSample(c.manager, { name: `Held too long ${unique()}` })
+    const scientist = (await c.technician.get('/api/custody/people')).body.items.find((p: { role: string }) => p.role === 'scientist')
+    expect((await c.technician.post(`/api/samples/${s.id}/custody`, { action: 'check-out', version: 1, holder: { userId: scientist.id }, run: 'Run 26-300', dueBack: dayFromNow(1) })).status).toBe(201)
+    await testDb()('sample_checkouts').where({ sample_id: s.id }).update({ due_back: testDb().raw('current_date - 2') })
+    await runNotices()
+    const mail = await waitForMail('scientist@larchmere-lab.example', new RegExp(`Overdue: ${s.code}`))
+    expect(mail.to).toEqual(expect.arrayContaining(['scientist@larchmere-lab.example', TECHNICIAN, MANAGER]))
   })
 
   it('sends a certificate notice that did not go out at issue, once', async () => {

@@ -63,6 +63,14 @@ describe('the sample list', () => {
     expect(byId.get(shelf.id)).toMatchObject({ samples: 1, path: `${room.code} › ${room.code}-C1 › ${shelf.code}` })
   })
 
+  it('finds an isotope however it is written: Ni-58, 58Ni, Ni58, ⁵⁸Ni', async () => {
+    for (const q of ['Ni-58', '58Ni', 'Ni58', 'ni-58', '⁵⁸Ni']) {
+      const r = await manager.get(`/api/samples?q=${encodeURIComponent(`${q} LOT-${tag}`)}&pageSize=100`)
+      expect(r.body.items.map((i: { code: string }) => i.code), q).toEqual([made.ni!.code])
+    }
+    expect((await manager.get(`/api/samples?q=${encodeURIComponent(`Ni-60 LOT-${tag}`)}`)).body.total).toBe(0)
+  })
+
   it('takes a % or _ in the search as the character itself', async () => {
     expect((await manager.get(`/api/samples?q=${encodeURIComponent(`${tag}%`)}`)).body.total).toBe(0)
   })

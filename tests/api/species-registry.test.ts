@@ -1,3 +1,4 @@
+import { parse } from 'csv-parse/sync'
 import { describe, it, expect, beforeAll, afterAll } from 'vitest'
 import { everyone, type Client } from '../support/api'
 import { testDb, closeTestDb } from '../support/db'
@@ -127,7 +128,16 @@ describe('the recorded-species list', () => {
     expect(bad.status).toBe(400)
     const csv = await c.auditor.get('/api/species?isoelectronic=Ne-like&format=csv')
     expect(csv.headers.get('content-type')).toMatch(/text\/csv/)
-    expect((csv.body as string).split('\n')[0]).toBe('species,spectroscopic,z,charge,mass_number,isoelectronic,samples,engine,recorded_at')
+    const [header, ...lines] = parse(csv.body as string) as string[][]
+    const ar = lines.find((l) => l[0] === 'Ar8+')!
+    expect(header!.join(',')).toBe('species,spectroscopic,z,charge,mass_number,isoelectronic,configuration,term,reference_eV,reference_source,best_estimate_eV,best_estimate_method,samples,engine,recorded_at')
+    // Ar IX (Ar8+): 422.6 eV as carried in shared/physics/data (NIST ASD via Debian python3-pymatgen).
+    expect(ar[6]).toBe('1s2 2s2 2p6')
+    expect(ar[7]).toMatch(/^1S/)
+    expect(Number(ar[8])).toBeCloseTo(422.6, 1)
+    expect(ar[9]).toMatch(/NIST ASD/)
+    expect(Number(ar[10])).toBeGreaterThan(0)
+    expect(ar[11]).toMatch(/^(scf-delta|slater-total-energy)$/)
   })
 })
 
@@ -144,6 +154,18 @@ describe('comparing species', () => {
     const r = await c.scientist.get('/api/species/compare?sequence=Ne-like&zFrom=10&zTo=14')
     expect(r.body.rows.map((x: { label: string }) => x.label)).toEqual(['Ne', 'Na+', 'Mg2+', 'Al3+', 'Si4+'])
     expect(r.body.rows.every((x: { core: string }) => x.core === '[He] 2s2 2p6')).toBe(true)
+  })
+
+  it('reports a bad entry in a list and shows the rest; refuses a list with nothing readable', async () => {
+    const r = await c.scientist.get(`/api/species/compare?species=${encodeURIComponent('Fe XIV, Xx 3+, Ni 2+')}`)
+    expect(r.status).toBe(200)
+    expect(r.body.rows.map((x: { label: string }) => x.label)).toEqual(['Fe13+', 'Ni2+'])
+    expect(r.body.rejected).toHaveLength(1)
+    expect(r.body.rejected[0].input).toBe('Xx 3+')
+    expect(r.body.rejected[0].message.length).toBeGreaterThan(5)
+    const none = await c.scientist.get(`/api/species/compare?species=${encodeURIComponent('Xx 3+, Qq')}`)
+    expect(none.status).toBe(400)
+    expect(none.body.data.rejected).toHaveLength(2)
   })
 
   it('takes a list, refuses two kinds at once, and exports CSV', async () => {

@@ -107,7 +107,8 @@ describe('the sample registry in the browser', () => {
     await page.waitForSelector('[data-testid=upload-progress][aria-valuenow="100"]')
     await expect(page.getByTestId('upload-message').innerText()).resolves.toContain('is stored')
     await expect(page.getByTestId('datasheet-list').innerText()).resolves.toContain(`coa-${tag}.pdf`)
-    await expect(page.getByTestId('history').innerText()).resolves.toContain('Datasheet added')
+    // The history reloads after the list: wait for it rather than read it at once.
+    await page.getByTestId('history').getByText('Datasheet added').waitFor()
     await snap(page, 'sample-page-desktop')
     await context.close()
   })
@@ -149,28 +150,37 @@ describe('the sample registry in the browser', () => {
     await context.close()
   })
 
-  it('tells an editor when someone else saved first, and lets them load that version', async () => {
+  it('on a version clash shows the fields that differ and saves the choices against the new version', async () => {
     const context = await newContext(browser)
     const page = await context.newPage()
     await signInAs(page, 'manager')
     await page.goto(`${samplePath}/edit`)
     await waitForApp(page)
-    // another manager's save, made while this form is open
+    // another manager's save, made while this form is open: a note and a supplier
     const status = await page.evaluate(async (path) => {
       const current = await (await fetch(`/api${path}`)).json()
-      return (await fetch(`/api${path}`, { method: 'PATCH', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ version: current.version, notes: 'Moved to drawer 2 by a colleague' }) })).status
+      return (await fetch(`/api${path}`, { method: 'PATCH', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ version: current.version, notes: 'Moved to drawer 2 by a colleague', supplier: 'Colleague Metals' }) })).status
     }, samplePath)
     expect(status).toBe(200)
     await page.fill('#s-name', `Nickel pair ${tag}, renamed`)
+    await page.fill('#s-supplier', 'My Supplier Ltd')
     await page.getByRole('button', { name: 'Save changes' }).click()
-    await page.getByTestId('conflict').waitFor()
-    await expect(page.getByTestId('conflict').isVisible()).resolves.toBe(true)
-    expect(await page.getByTestId('conflict').evaluate((el) => el.getBoundingClientRect().top >= 0 && el.getBoundingClientRect().bottom <= window.innerHeight)).toBe(true)
-    await page.getByRole('button', { name: 'Load the current version' }).click()
-    await expect(page.inputValue('#s-notes')).resolves.toBe('Moved to drawer 2 by a colleague')
-    await page.fill('#s-name', `Nickel pair ${tag}, renamed`)
-    await Promise.all([page.waitForURL((u) => u.pathname === samplePath), page.getByRole('button', { name: 'Save changes' }).click()])
+    await page.getByTestId('clash').waitFor()
+    expect(await page.getByTestId('clash').evaluate((el) => el.getBoundingClientRect().top >= 0 && el.getBoundingClientRect().top < window.innerHeight)).toBe(true)
+    // Every field that differs, each with yours and theirs; only those.
+    const fields = await page.locator('[data-clash]').evaluateAll((els) => els.map((e) => e.getAttribute('data-clash')))
+    expect(fields.sort()).toEqual(['name', 'notes', 'supplier'])
+    await expect(page.locator('[data-clash=name]').innerText()).resolves.toContain(`Nickel pair ${tag}, renamed`)
+    // Defaults: what was changed here is kept, what only they changed is taken from them.
+    await expect(page.getByTestId('keep-yours-name').isChecked()).resolves.toBe(true)
+    await expect(page.getByTestId('keep-theirs-notes').isChecked()).resolves.toBe(true)
+    await expect(page.getByTestId('keep-yours-supplier').isChecked()).resolves.toBe(true)
+    await page.getByTestId('keep-theirs-supplier').check()
+    await snap(page, 'sample-clash-merge-desktop')
+    await Promise.all([page.waitForURL((u) => u.pathname === samplePath), page.getByTestId('clash-save').click()])
     await page.getByRole('heading', { level: 1, name: `Nickel pair ${tag}, renamed` }).waitFor()
+    const saved = await page.evaluate(async (path) => (await fetch(`/api${path}`)).json(), samplePath)
+    expect(saved).toMatchObject({ name: `Nickel pair ${tag}, renamed`, notes: 'Moved to drawer 2 by a colleague', supplier: 'Colleague Metals' })
     await expect(page.getByTestId('history').innerText()).resolves.toContain(`Nickel pair ${tag} → Nickel pair ${tag}, renamed`)
     await context.close()
   })

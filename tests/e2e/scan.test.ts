@@ -26,7 +26,7 @@ describe('scanning a label on a phone', () => {
   it('reads a photo of a label, opens the bench card and moves the sample', async () => {
     const sample = await createSample(manager, { name: `Scanned foil ${unique()}`, locationId: places[0]!.id, massMg: 4, hazardStatements: 'H317 H351 H372' })
     // The photo: the single label as the label printer would print it, rendered at 200 dpi.
-    const label = await technician.post('/api/labels', { sampleIds: [sample.id], layout: 'single' })
+    const label = await technician.post('/api/labels', { sampleIds: [sample.id], layout: 'single', allowLoopback: true })
     expect(label.status).toBe(200)
     const [photo] = await renderPages(label.body as Buffer, 200)
 
@@ -57,12 +57,15 @@ describe('scanning a label on a phone', () => {
     expect(after).toMatchObject({ locationId: to.id, version: 2 })
 
     await page.getByTestId('action-check-out').click()
-    await page.getByTestId('act-holder').fill('Visiting group from Brelund')
+    // To a person of the lab, found by typing part of the name in the searchable select.
+    await page.getByTestId('act-person-filter').fill('vella')
+    await expect(page.getByTestId('act-person').inputValue()).resolves.not.toBe('')
+    await expect(page.locator('[data-testid=act-person] option:checked').innerText()).resolves.toBe('Tobias Vellacott')
     await page.getByTestId('act-run').fill('Beam time 26-41')
     await snap(page, 'bench-checkout-form-phone')
     await page.getByTestId('act-save').click()
     await page.getByTestId('bench-checkout').waitFor()
-    await expect(page.getByTestId('bench-checkout').innerText()).resolves.toContain('Visiting group from Brelund')
+    await expect(page.getByTestId('bench-checkout').innerText()).resolves.toContain('Tobias Vellacott')
     await page.getByTestId('action-consume').click()
     await page.getByTestId('act-amount').fill('1,5')
     await expect(page.getByTestId('action-form').innerText()).resolves.toContain('2.5 mg will be left.')
@@ -70,6 +73,39 @@ describe('scanning a label on a phone', () => {
     await page.getByTestId('bench-notice').getByText('Use recorded.').waitFor()
     await expect(page.getByTestId('bench-mass').innerText()).resolves.toBe('2.5 mg')
     await snap(page, 'bench-card-after-phone')
+
+    // More than is left: said in the form, with what is left, and nothing changes.
+    await page.getByTestId('action-consume').click()
+    await page.getByTestId('act-amount').fill('3.1')
+    await page.getByTestId('act-save').click()
+    await expect(page.getByRole('alert').filter({ hasText: 'Only 2.5 mg left' }).count()).resolves.toBe(1)
+
+    // "My check-outs": the check-out the technician made, with its holder and due day.
+    await page.goto('/checkouts?scope=mine')
+    await waitForApp(page)
+    const mine = page.getByTestId('checkout-item').filter({ hasText: sample.code })
+    await expect(mine.innerText()).resolves.toContain('Tobias Vellacott')
+    await expect(noSideways(page)).resolves.toBe(true)
+    await snap(page, 'checkouts-mine-phone')
+    await context.close()
+  })
+
+  it('lists every code in a photo of a whole label sheet and opens the one picked', async () => {
+    const chosen = (await technician.get('/api/samples?pageSize=30&sort=code')).body.items.slice(0, 12)
+    const sheet = await technician.post('/api/labels', { sampleIds: chosen.map((s: any) => s.id), layout: 'sheet', allowLoopback: true })
+    const [photo] = await renderPages(sheet.body as Buffer, 150)
+    const context = await newContext(browser, 'phone')
+    const page = await context.newPage()
+    await signInAs(page, 'technician')
+    await page.goto('/scan')
+    await waitForApp(page)
+    await page.getByTestId('scan-photo').setInputFiles(photo!)
+    await page.getByTestId('scan-choices').waitFor({ timeout: 45_000 })
+    const listed = await page.getByTestId('scan-choice').allInnerTexts()
+    expect(listed.sort()).toEqual(chosen.map((s: any) => s.code).sort())
+    await snap(page, 'scan-several-codes-phone')
+    await Promise.all([page.waitForURL(`**/scan/${chosen[4].code}`), page.getByTestId('scan-choice').filter({ hasText: chosen[4].code }).click()])
+    await page.getByTestId('bench-card').waitFor()
     await context.close()
   })
 
@@ -82,7 +118,13 @@ describe('scanning a label on a phone', () => {
     await waitForApp(page)
     await page.getByTestId('scan-code').fill('X-12')
     await page.getByTestId('scan-code').press('Enter')
-    await expect(page.getByTestId('scan-problem').innerText()).resolves.toMatch(/not a sample code/)
+    await expect(page.getByTestId('scan-problem').innerText()).resolves.toMatch(/"X-12" is not a sample code/)
+    // A well-formed code that names no sample: what was read, and a way to type it again.
+    await page.getByTestId('scan-code').fill('S-2026-999999')
+    await Promise.all([page.waitForURL('**/scan/S-2026-999999'), page.getByTestId('scan-code').press('Enter')])
+    await expect(page.getByTestId('bench-unknown-read').innerText()).resolves.toBe('S-2026-999999')
+    await Promise.all([page.waitForURL('**/scan?typed=*'), page.getByTestId('bench-type-again').click()])
+    await expect(page.getByTestId('scan-code').inputValue()).resolves.toBe('S-2026-999999')
     await page.getByTestId('scan-code').fill(sample.code.replace(/-0+/, '-'))
     await Promise.all([page.waitForURL(`**/scan/${sample.code}`), page.getByTestId('scan-code').press('Enter')])
     await page.getByTestId('bench-card').waitFor()
@@ -128,7 +170,10 @@ describe('printing labels from the lists', () => {
     await expect(page.getByTestId('print-labels').innerText()).resolves.toBe('Print labels (2)')
     await page.getByTestId('label-layout').selectOption('single')
     await snap(page, 'samples-list-labels-desktop')
-    const [download] = await Promise.all([page.waitForEvent('download'), page.getByTestId('print-labels').click()])
+    // The test server's public address is a loopback one: the page warns before printing.
+    await page.getByTestId('print-labels').click()
+    await page.getByTestId('labels-loopback').waitFor()
+    const [download] = await Promise.all([page.waitForEvent('download'), page.getByTestId('print-labels-anyway').click()])
     expect((await pdfPages(readFileSync((await download.path())!))).pages).toBe(2)
     await context.close()
   })

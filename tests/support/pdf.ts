@@ -90,3 +90,33 @@ export function inkBox(png: string, dpi: number): { left: number; top: number; r
   const mm = (px: number) => (px / dpi) * 25.4
   return { left: mm(x0), top: mm(y0), right: mm(page.width - 1 - x1), bottom: mm(page.height - 1 - y1) }
 }
+
+/** The longest horizontal run of dark pixels (mm) in the band `fromMm`…`toMm` from the top of a page rendered at `dpi`. */
+export function longestDarkRunMm(png: string, dpi: number, fromMm: number, toMm: number): number {
+  const page = readPng(png)
+  const px = (mm: number) => Math.round((mm / 25.4) * dpi)
+  let best = 0
+  for (let y = px(fromMm); y <= Math.min(page.height - 1, px(toMm)); y++) {
+    let run = 0
+    for (let x = 0; x < page.width; x++) {
+      const i = (y * page.width + x) * 4
+      run = page.data[i]! < 100 && page.data[i + 1]! < 100 && page.data[i + 2]! < 100 ? run + 1 : 0
+      if (run > best) best = run
+    }
+  }
+  return (best / dpi) * 25.4
+}
+
+/** How many pixels of a rendered page, within a box in mm, are the GHS frame's red (strong red, little green or blue). */
+export function redPixels(png: string, dpi: number, box: { x: number; y: number; w: number; h: number }): number {
+  const page = readPng(png)
+  const px = (mm: number) => Math.round((mm / 25.4) * dpi)
+  let n = 0
+  for (let y = px(box.y); y < Math.min(page.height, px(box.y + box.h)); y++) {
+    for (let x = px(box.x); x < Math.min(page.width, px(box.x + box.w)); x++) {
+      const i = (y * page.width + x) * 4
+      if (page.data[i]! > 180 && page.data[i + 1]! < 90 && page.data[i + 2]! < 90) n++
+    }
+  }
+  return n
+}

@@ -21,10 +21,20 @@ export default defineEventHandler(async (event) => {
   const query = queryValid(event, CompareQuery)
 
   let list: ParsedSpecies[] = []
+  const rejected: { input: string; message: string }[] = []
   if (query.species) {
     const texts = query.species.split(/[,;\n]/).map((s) => s.trim()).filter(Boolean)
     if (texts.length > COMPARE_LIMIT) invalid('species', `At most ${COMPARE_LIMIT} species at once`)
-    list = texts.map((t) => parseSpeciesInput(t))
+    // A bad entry is reported beside the others, not made to fail the whole comparison.
+    for (const t of texts) {
+      try {
+        list.push(parseSpeciesInput(t))
+      } catch (e: any) {
+        if (e?.statusCode !== 400) throw e
+        rejected.push({ input: t.slice(0, 40), message: String(e.message) })
+      }
+    }
+    if (!list.length) throw createError({ statusCode: 400, statusMessage: 'Unknown species', message: 'None of the species could be read', data: { rejected, issues: [{ path: 'species', message: rejected[0]?.message ?? 'Name at least one species' }] } })
   } else if (query.element) {
     const e = elementOf(query.element, 'element')
     const from = query.from ?? 0
@@ -74,5 +84,5 @@ export default defineEventHandler(async (event) => {
       },
     )
   }
-  return { methods: METHOD_NAMES, rows }
+  return { methods: METHOD_NAMES, rows, rejected }
 })

@@ -1,5 +1,6 @@
 import { GUARDED_CSV } from '#shared/csv/safe'
 import { stringify } from 'csv-stringify/sync'
+import { speciesCsvPhysics } from '#shared/physics/csv-physics'
 import { CAN } from '#shared/auth/roles'
 import { SpeciesListQuery } from '#shared/schemas/species'
 import { getElement, parseSpecies } from '#shared/physics'
@@ -50,12 +51,18 @@ export default defineEventHandler(async (event) => {
     q.select('species.*', db.raw('(select count(*)::int from sample_species where sample_species.species_id = species.id) as samples'), db.raw('(select max(engine_version) from species_results r where r.species_id = species.id) as engine'))
 
   if (query.format === 'csv') {
-    const rows = await withCounts(ordered().limit(20_000))
+    // The physics of the newest recorded result travels with each row: configuration, term,
+    // the reference energy and its source, and the engine's best estimate with its method.
+    const newest = db.raw(`(select r.result from species_results r where r.species_id = species.id order by r.recorded_at desc limit 1) as record`)
+    const rows = await withCounts(ordered().limit(20_000)).select(newest)
     setResponseHeader(event, 'Content-Type', 'text/csv; charset=utf-8')
     setResponseHeader(event, 'Content-Disposition', 'attachment; filename="ionfolio-species.csv"')
     return stringify(
-      rows.map((r: any) => [r.label, r.spectroscopic, r.z, r.charge, r.mass_number ?? '', r.isoelectronic ?? '', r.samples, r.engine ?? '', new Date(r.created_at).toISOString()]),
-      { ...GUARDED_CSV, header: true, columns: ['species', 'spectroscopic', 'z', 'charge', 'mass_number', 'isoelectronic', 'samples', 'engine', 'recorded_at'] },
+      rows.map((r: any) => {
+        const p = speciesCsvPhysics(r.record)
+        return [r.label, r.spectroscopic, r.z, r.charge, r.mass_number ?? '', r.isoelectronic ?? '', p.configuration, p.term, p.referenceEv, p.referenceSource, p.bestEv, p.bestMethod, r.samples, r.engine ?? '', new Date(r.created_at).toISOString()]
+      }),
+      { ...GUARDED_CSV, header: true, columns: ['species', 'spectroscopic', 'z', 'charge', 'mass_number', 'isoelectronic', 'configuration', 'term', 'reference_eV', 'reference_source', 'best_estimate_eV', 'best_estimate_method', 'samples', 'engine', 'recorded_at'] },
     )
   }
 

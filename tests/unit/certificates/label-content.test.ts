@@ -13,22 +13,32 @@ const base = {
 describe('what a label says', () => {
   it('names an enriched isotope with its enrichment as the main species', () => {
     const l = labelContent({ ...base, code: 'S-2026-000003', name: '58Ni foil', formula: 'Ni', hazardStatements: ['H317', 'H351', 'H372'], components: [{ z: 28, massNumber: 58, fraction: 1, basis: 'atom', enrichmentPercent: 99.61 }] }, 'https://lab.example/')
-    expect(l.mainSpecies).toBe('⁵⁸Ni 99.61 %')
+    expect(l.composition).toBe('⁵⁸Ni 99.61 %')
+    expect(l.place).toBeNull()
     expect(l.url).toBe('https://lab.example/scan/S-2026-000003')
     expect(l.pictograms).toEqual(['GHS07', 'GHS08'])
     expect(l.radiation).toBeNull()
   })
 
-  it('takes the element recorded first for a compound, with the formula beside it', () => {
+  it('lists a compound\'s components in recorded order, with the formula beside them', () => {
     const l = labelContent({ ...base, code: 'S-2026-000026', name: 'Titanium hydride cathode', formula: 'TiH2', form: 'sputter_cathode', components: [{ z: 22, massNumber: null, fraction: 0.3333, basis: 'atom', enrichmentPercent: null }, { z: 1, massNumber: null, fraction: 0.6667, basis: 'atom', enrichmentPercent: null }] }, 'http://x')
-    expect(l.mainSpecies).toBe('Ti · TiH₂')
+    expect(l.composition).toBe('Ti + H · TiH₂')
   })
 
   it('carries a radiation caution with the nuclide for a radioactive sample', () => {
     const l = labelContent({ ...base, code: 'S-2026-000034', name: 'UF4 target', formula: 'UF4', radioactive: true, nuclide: 'U-238', hazardStatements: ['H300', 'H330', 'H373', 'H411'], components: [{ z: 92, massNumber: 238, fraction: 0.2, basis: 'atom', enrichmentPercent: 99.8 }, { z: 9, massNumber: null, fraction: 0.8, basis: 'atom', enrichmentPercent: null }] }, 'http://x')
     expect(l.radiation).toEqual({ nuclide: 'U-238' })
-    expect(l.mainSpecies).toBe('²³⁸U 99.8 % · UF₄')
+    expect(l.composition).toBe('²³⁸U 99.8 % + F · UF₄')
     expect(l.pictograms).toEqual(['GHS06', 'GHS08', 'GHS09'])
+  })
+
+  it('lists every component, not only the first, and the storage place', () => {
+    const l = labelContent(
+      { ...base, code: 'S-2026-000008', name: '7LiF on carbon backing', formula: 'LiF', place: { path: 'B1 › R104 › C3', name: 'Target cabinet' }, components: [{ z: 3, massNumber: 7, fraction: 0.5, basis: 'atom', enrichmentPercent: 99.9 }, { z: 9, massNumber: null, fraction: 0.5, basis: 'atom', enrichmentPercent: null }] },
+      'http://x',
+    )
+    expect(l.composition).toBe('⁷Li 99.9 % + F · LiF')
+    expect(l.place).toBe('C3 (Target cabinet)')
   })
 
   it('flags an element with no stable isotope as radioactive even when the record forgot to', () => {

@@ -39,3 +39,11 @@ describe('cautions', () => {
     }
   })
 })
+
+describe('H-statements keep their letter suffixes in the caution box', () => {
+  it('lists H350i and H360FD as stored, matched on the GHS code they refine', () => {
+    const toxic = classifyHazards({ ...base, hazardStatements: ['H350i', 'H360FD', 'H302'] }).find((c) => c.kind === 'toxic')!
+    expect(toxic.reasons).toContain('Hazard statements H350i, H360FD.')
+    expect(toxic.reasons.join(' ')).not.toMatch(/H350(?!i)|H360(?!FD)/)
+  })
+})
