@@ -20,3 +20,4 @@ export type { BreedResult, BreedStep, BreedTarget, ShellThreshold } from './bree
 export { breed, integratePopulations } from './breeding'
 export type { IonRef, StripPlan, StripRequest, BreedPlan, BreedRequest } from './plan'
 export { stripPlan, breedPlan, parseIon, BeamInputError } from './plan'
+export { formatStrip, formatBreed } from './text'

@@ -76,7 +76,7 @@ export function stripPlan(req: StripRequest): StripPlan {
     throw e
   }
   const unit = req.unit ?? 'MeV/u'
-  const mass = ionMass(ion.z, ion.massNumber, Math.max(ion.charge, 0))
+  const mass = ionMass(ion.z, ion.massNumber, ion.charge)
   const forms = energyForms(req.energy, unit, mass)
   const m = motion(forms.totalMeV, mass.ionMassMeV)
   const warnings: string[] = []
