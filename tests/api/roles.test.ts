@@ -55,6 +55,14 @@ const MATRIX: Array<{ route: string; method: string; body?: unknown; expect: Rec
   { method: 'POST', route: `/api/samples/${randomUUID()}/custody`, body: { action: 'teleport' }, expect: { manager: 400, scientist: 403, technician: 400, auditor: 403, anonymous: 401 } },
   { method: 'POST', route: `/api/samples/${randomUUID()}/custody`, body: { action: 'condition', version: 1, note: 'fine' }, expect: { manager: 404, scientist: 403, technician: 404, auditor: 403, anonymous: 401 } },
   { method: 'GET', route: `/api/samples/${randomUUID()}/custody`, expect: { manager: 404, scientist: 404, technician: 404, auditor: 404, anonymous: 401 } },
+  { method: 'GET', route: '/api/beam/charge-states?ion=Pb&energy=4.2&medium=C', expect: { manager: 200, scientist: 200, technician: 200, auditor: 200, anonymous: 401 } },
+  { method: 'GET', route: '/api/beam/breeding?ion=Ne&electronEnergy=2000&currentDensity=100', expect: { manager: 200, scientist: 200, technician: 200, auditor: 200, anonymous: 401 } },
+  { method: 'GET', route: '/api/beam/stock?z=6', expect: { manager: 200, scientist: 200, technician: 200, auditor: 200, anonymous: 401 } },
+  { method: 'GET', route: '/api/beam/plans', expect: { manager: 200, scientist: 200, technician: 200, auditor: 200, anonymous: 401 } },
+  { method: 'GET', route: '/api/beam/plans?format=csv', expect: { manager: 200, scientist: 200, technician: 200, auditor: 200, anonymous: 401 } },
+  { method: 'POST', route: '/api/beam/plans', body: { ion: '' }, expect: { manager: 400, scientist: 400, technician: 403, auditor: 403, anonymous: 401 } },
+  { method: 'GET', route: `/api/beam/plans/${randomUUID()}`, expect: { manager: 404, scientist: 404, technician: 404, auditor: 404, anonymous: 401 } },
+  { method: 'GET', route: `/api/beam/plans/${randomUUID()}/rerun`, expect: { manager: 404, scientist: 404, technician: 404, auditor: 404, anonymous: 401 } },
   { method: 'POST', route: '/api/notices/run', expect: { manager: 200, scientist: 403, technician: 403, auditor: 403, anonymous: 401 } },
 ]
 
