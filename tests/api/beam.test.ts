@@ -61,8 +61,14 @@ describe('saved plans', () => {
     for (const f of r.body.foils) expect(['retired', 'depleted']).not.toContain(f.status)
     foil = r.body.foils.find((f: { formula: string; arealDensityUgCm2: number }) => f.formula === 'C' && f.arealDensityUgCm2 === 20)
     expect(foil).toBeTruthy()
-    // The demo's 58Ni cathode (99.5 % 58Ni) comes before natural nickel.
-    expect(r.body.sources[0]).toMatchObject({ massNumber: 58, enrichmentPct: 99.5 })
+    // Samples enriched in 58Ni come first, most enriched first (the demo holds a 99.5 % 58Ni
+    // cathode among them), then natural nickel.
+    const kinds = r.body.sources.map((s: { massNumber: number | null }) => (s.massNumber === 58 ? 'enriched' : s.massNumber === null ? 'natural' : 'other'))
+    expect(kinds[0]).toBe('enriched')
+    expect(kinds.lastIndexOf('enriched')).toBeLessThan(kinds.indexOf('natural'))
+    const enriched = r.body.sources.filter((s: { massNumber: number | null }) => s.massNumber === 58).map((s: { enrichmentPct: number }) => s.enrichmentPct)
+    expect(enriched).toEqual([...enriched].sort((a, b) => b - a))
+    expect(enriched).toContain(99.5)
   })
 
   it('a scientist saves a plan with the foil from the stock; it is audited and frozen', async () => {
