@@ -12,8 +12,8 @@ export default defineEventHandler(async (event) => {
     .where('s.form', 'stripper_foil')
     .whereNotIn('s.status', ['retired', 'depleted'])
     .orderBy([{ column: 's.formula' }, { column: 's.areal_density_ug_cm2' }, { column: 's.code' }])
-    .select('s.id', 's.code', 's.name', 's.formula', 's.status', 's.areal_density_ug_cm2', 'l.code as location_code', 'l.name as location_name')
-  let sources: unknown[] = []
+    .select('s.id', 's.code', 's.name', 's.formula', 's.status', 's.areal_density_ug_cm2', 'l.code as location_code', 'l.name as location_name') as FoilRow[]
+  let sources: Source[] = []
   if (q.z) {
     // Enrichment in the asked isotope: a component naming it gives its enrichment (or 100 % of an
     // isotope-only component); natural material gives the natural abundance, computed by the page.
@@ -22,9 +22,9 @@ export default defineEventHandler(async (event) => {
       .leftJoin('locations as l', 'l.id', 's.location_id')
       .where('c.z', q.z)
       .whereNotIn('s.status', ['retired', 'depleted'])
-      .select('s.id', 's.code', 's.name', 's.form', 's.status', 'c.mass_number', 'c.enrichment_pct', 'c.fraction', 'l.code as location_code')
+      .select('s.id', 's.code', 's.name', 's.form', 's.status', 'c.mass_number', 'c.enrichment_pct', 'c.fraction', 'l.code as location_code') as SourceRow[]
     sources = rows
-      .map((r: any) => ({
+      .map((r) => ({
         id: r.id,
         code: r.code,
         name: r.name,
@@ -38,10 +38,14 @@ export default defineEventHandler(async (event) => {
       .sort((a, b) => Number(b.matches) - Number(a.matches) || enrichmentRank(b, q.massNumber) - enrichmentRank(a, q.massNumber) || a.code.localeCompare(b.code))
   }
   return {
-    foils: foils.map((f: any) => ({ id: f.id, code: f.code, name: f.name, formula: f.formula, status: f.status, arealDensityUgCm2: f.areal_density_ug_cm2, place: f.location_code ? { code: f.location_code, name: f.location_name } : null })),
+    foils: foils.map((f) => ({ id: f.id, code: f.code, name: f.name, formula: f.formula, status: f.status, arealDensityUgCm2: f.areal_density_ug_cm2, place: f.location_code ? { code: f.location_code, name: f.location_name } : null })),
     sources,
   }
 })
+
+interface FoilRow { id: string; code: string; name: string; formula: string | null; status: string; areal_density_ug_cm2: number | null; location_code: string | null; location_name: string | null }
+interface SourceRow { id: string; code: string; name: string; form: string; status: string; mass_number: number | null; enrichment_pct: number | null; fraction: number; location_code: string | null }
+interface Source { id: string; code: string; name: string; form: string; status: string; place: string | null; massNumber: number | null; enrichmentPct: number | null; matches: boolean }
 
 // Enriched in the asked isotope first (by its enrichment), then natural material.
 function enrichmentRank(s: { massNumber: number | null; enrichmentPct: number | null }, massNumber?: number): number {
