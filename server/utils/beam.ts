@@ -1,5 +1,8 @@
 import type { H3Event } from 'h3'
 import { BEAM_ENGINE_VERSION, BeamInputError, breedPlan, stripPlan, type BindingSources, type BreedPlan, type BreedRequest, type StripPlan, type StripRequest } from '#shared/beam'
+import { ENGINE_VERSION, subshellLabel } from '#shared/physics'
+import { SCF_METHOD } from '#shared/physics/scf'
+import type { ScfOrbital } from '#shared/physics/scf/types'
 import type { BeamPlanInput } from '#shared/schemas/beam'
 import type { BeamPlanRow } from '#shared/types/db'
 
@@ -19,22 +22,35 @@ export function runStrip(req: StripRequest): StripPlan {
   }
 }
 
-/**
- * Binding energies that recorded species of this element carry (`bindingEnergies`, added by the
- * relativistic engine), by charge state; empty until species records hold them.
- */
-export async function recordedBindings(z: number): Promise<BindingSources> {
-  const rows = (await useDb()('species as s')
-    .join('species_results as r', 'r.species_id', 's.id')
-    .where('s.z', z)
-    .whereRaw("jsonb_exists(r.result, 'bindingEnergies')")
-    .orderBy('r.recorded_at', 'asc')
-    .select('s.charge', useDb().raw("r.result->'bindingEnergies' as bindings"))) as Array<{ charge: number; bindings: unknown }>
-  const recorded: NonNullable<BindingSources['recorded']> = {}
-  for (const r of rows) if (Array.isArray(r.bindings)) recorded[r.charge] = r.bindings as never
-  return Object.keys(recorded).length ? { recorded } : {}
-}
+const HARTREE_EV = 27.211386245988 // CODATA 2018
 
+/**
+ * What the server knows beyond the engine's defaults for element z, by charge state: binding
+ * energies that recorded species carry (`bindingEnergies`, from the relativistic engine) and the
+ * orbital eigenvalues of SCF solves already in the cache (never solved here: a breed answer must
+ * stay fast). Only the orbital lists are read, not the stored densities.
+ */
+export async function bindingSources(z: number): Promise<BindingSources> {
+  const db = useDb()
+  const [records, scfRows] = await Promise.all([
+    db('species as s')
+      .join('species_results as r', 'r.species_id', 's.id')
+      .where('s.z', z)
+      .whereRaw("jsonb_exists(r.result, 'bindingEnergies')")
+      .orderBy('r.recorded_at', 'asc')
+      .select('s.charge', db.raw("r.result->'bindingEnergies' as bindings")) as Promise<Array<{ charge: number; bindings: unknown }>>,
+    db('species_scf_cache')
+      .where({ z, method: SCF_METHOD, engine_version: ENGINE_VERSION })
+      .select('charge', db.raw("result->'species'->'orbitals' as orbitals"), db.raw("(result->'species'->>'converged')::boolean as converged")) as Promise<Array<{ charge: number; orbitals: ScfOrbital[] | null; converged: boolean }>>,
+  ])
+  const sources: BindingSources = {}
+  for (const r of records) if (Array.isArray(r.bindings)) (sources.recorded ??= {})[r.charge] = r.bindings as never
+  for (const r of scfRows) {
+    if (!r.converged || !Array.isArray(r.orbitals)) continue
+    ;(sources.scf ??= {})[r.charge] = Object.fromEntries(r.orbitals.map((o) => [subshellLabel(o.n, o.l), -o.energyHartree * HARTREE_EV]))
+  }
+  return sources
+}
 
 /** The breed plan with any recorded binding energies, or a 400 naming the field refused. */
 export async function runBreed(req: Omit<BreedRequest, 'bindings'>): Promise<BreedPlan> {
@@ -44,7 +60,7 @@ export async function runBreed(req: Omit<BreedRequest, 'bindings'>): Promise<Bre
   } catch (e) {
     badInput(e)
   }
-  const bindings = await recordedBindings(z)
+  const bindings = await bindingSources(z)
   try {
     return breedPlan({ ...req, bindings })
   } catch (e) {

@@ -18,6 +18,14 @@ describe('Lotz cross-sections', () => {
     expect(lotzCrossSection(2000, ne)).toBeGreaterThan(outerOnly)
   })
 
+  it('uses SCF eigenvalues for inner subshells when the server passes them, never below the outermost', () => {
+    const subs = subshellBindings(10, 0, { scf: { 0: { '1s': 832.5, '2s': 1, '2p': 19.9 } } })
+    expect(subs[0]).toMatchObject({ subshell: '1s', eV: 832.5 })
+    expect(subs[0]!.method).toMatch(/SCF/)
+    expect(subs[1]!.eV).toBeCloseTo(21.5645, 3) // raised to the outermost: Ne I ionisation energy 21.5645 eV (NIST ASD)
+    expect(subs[2]!.method).toMatch(/reference ionisation energy/)
+  })
+
   it('takes binding energies from a species record when given', () => {
     const subs = subshellBindings(10, 0, { recorded: { 0: [{ subshell: '1s', eV: 870, method: 'dirac-fock' }, { subshell: '2p1/2', eV: 21.7, method: 'dirac-fock' }, { subshell: '2p3/2', eV: 21.6, method: 'dirac-fock' }] } })
     expect(subs[0]).toMatchObject({ subshell: '1s', eV: 870 })

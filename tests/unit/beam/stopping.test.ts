@@ -1,11 +1,18 @@
 import { describe, expect, it } from 'vitest'
-import { blochCorrection, motion, parseMedium, protonStopping, stripPlan } from '../../../shared/beam/index'
+import { blochCorrection, effectiveCharge, motion, parseMedium, protonStopping, stripPlan } from '../../../shared/beam/index'
 
 describe('Bethe proton stopping', () => {
   it('10 MeV protons in water: 45.67 MeV cm²/g (NIST PSTAR, electronic stopping, I = 75 eV — from memory) within 2 %', () => {
     const beta = motion(10, 938.27208816).beta
     const s = protonStopping(beta, 0.55509, 75) // Z/A of H2O: 10/18.015
     expect(Math.abs(s / 45.67 - 1)).toBeLessThan(0.02)
+  })
+
+  it('5 MeV alpha particles in water through the effective charge: 0.889 MeV cm²/mg (NIST ASTAR, electronic — from memory) within 10 %', () => {
+    const m = motion(5, 4.001506179 * 931.49410242) // alpha mass, CODATA 2018
+    const z = effectiveCharge(2, m.vOverV0)
+    const s = (z * z * protonStopping(m.beta, 0.55509, 75)) / 1000
+    expect(Math.abs(s / 0.889 - 1)).toBeLessThan(0.1)
   })
 
   it("Bloch's correction tends to −1.202 y² for small y (ζ(3) = 1.2020569, Bloch 1933)", () => {
