@@ -53,7 +53,7 @@ export interface StripInput {
 const SG = 'G. Schiwietz and P. L. Grande, Nucl. Instrum. Methods B 175–177, 125 (2001), Eqs. (1)–(6)'
 const ND = 'V. S. Nikolaev and I. S. Dmitriev, Phys. Lett. 28A, 277 (1968)'
 const SAYER = 'R. O. Sayer, Rev. Phys. Appl. 12, 1543 (1977)'
-const BARON = 'E. Baron, M. Bajard and Ch. Ricaud, Nucl. Instrum. Methods A 328, 177 (1993)'
+const BARON = 'E. Baron, M. Bajard and Ch. Ricaud, "Charge exchange of very heavy ions in carbon foils and in the residual gas of GANIL cyclotrons", Nucl. Instrum. Methods A 328, 177 (1993)'
 
 /** Gaussian fractions of mean m and standard deviation d at q = 0…Z, normalised over that range. */
 export function gaussianFractions(z: number, mean: number, d: number): ChargeFraction[] {
