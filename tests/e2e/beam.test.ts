@@ -38,6 +38,10 @@ describe('beam planning page', () => {
     await expect(page.getByTestId('beam-loss').innerText()).resolves.toMatch(/MeV .* in 20 µg\/cm²/)
     await page.getByTestId('breed-table').waitFor()
     await page.getByLabel('Choose 54+').check()
+    // The enriched 208Pb target of the demo stock is offered first as the sample to pull, with its cautions.
+    await expect(page.getByTestId('beam-sources').locator('li').first().innerText()).resolves.toMatch(/208Pb target[\s\S]*208: 98\.7 % enriched/)
+    const source = await page.locator('#plan-source option', { hasText: '208Pb target' }).first().getAttribute('value')
+    await page.selectOption('#plan-source', source!)
     await page.fill('#plan-title', 'Pb54+ for the test run')
     await page.getByTestId('beam-save-button').click()
     await page.getByRole('link', { name: 'Pb54+ for the test run' }).first().waitFor()
@@ -47,10 +51,14 @@ describe('beam planning page', () => {
     await page.getByTestId('plan-summary').waitFor()
     const summary = await page.getByTestId('plan-summary').innerText()
     expect(summary).toContain('54+')
-    expect(summary).toMatch(/S-\d{4}-\d{6}/)
+    expect(summary.match(/S-\d{4}-\d{6}/g)).toHaveLength(2) // the foil and the sample to pull
     await page.getByTestId('beam-rerun').click()
     await page.getByTestId('rerun-same').waitFor()
     await snap(page, 'beam-plan-page')
+    // The foil's own page lists the plans that use it.
+    await page.goto(`/samples/${value}`)
+    await page.getByText('Plans that use this foil').waitFor()
+    await expect(page.getByTestId('beam-plans').innerText()).resolves.toContain('Pb54+ for the test run')
     await context.close()
   })
 

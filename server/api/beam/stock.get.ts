@@ -22,7 +22,7 @@ export default defineEventHandler(async (event) => {
       .leftJoin('locations as l', 'l.id', 's.location_id')
       .where('c.z', q.z)
       .whereNotIn('s.status', ['retired', 'depleted'])
-      .select('s.id', 's.code', 's.name', 's.form', 's.status', 'c.mass_number', 'c.enrichment_pct', 'c.fraction', 'l.code as location_code') as SourceRow[]
+      .select('s.id', 's.code', 's.name', 's.form', 's.status', 's.hazard_kinds', 'c.mass_number', 'c.enrichment_pct', 'c.fraction', 'l.code as location_code') as SourceRow[]
     sources = rows
       .map((r) => ({
         id: r.id,
@@ -31,6 +31,7 @@ export default defineEventHandler(async (event) => {
         form: r.form,
         status: r.status,
         place: r.location_code ?? null,
+        hazardKinds: r.hazard_kinds,
         massNumber: r.mass_number ?? null,
         enrichmentPct: r.mass_number === null ? null : (r.enrichment_pct ?? null),
         matches: q.massNumber === undefined || r.mass_number === null || r.mass_number === q.massNumber,
@@ -44,8 +45,8 @@ export default defineEventHandler(async (event) => {
 })
 
 interface FoilRow { id: string; code: string; name: string; formula: string | null; status: string; areal_density_ug_cm2: number | null; location_code: string | null; location_name: string | null }
-interface SourceRow { id: string; code: string; name: string; form: string; status: string; mass_number: number | null; enrichment_pct: number | null; fraction: number; location_code: string | null }
-interface Source { id: string; code: string; name: string; form: string; status: string; place: string | null; massNumber: number | null; enrichmentPct: number | null; matches: boolean }
+interface SourceRow { id: string; code: string; name: string; form: string; status: string; hazard_kinds: string[]; mass_number: number | null; enrichment_pct: number | null; fraction: number; location_code: string | null }
+interface Source { id: string; code: string; name: string; form: string; status: string; place: string | null; hazardKinds: string[]; massNumber: number | null; enrichmentPct: number | null; matches: boolean }
 
 // Enriched in the asked isotope first (by its enrichment), then natural material.
 function enrichmentRank(s: { massNumber: number | null; enrichmentPct: number | null }, massNumber?: number): number {
