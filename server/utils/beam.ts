@@ -1,5 +1,5 @@
 import type { H3Event } from 'h3'
-import { BEAM_ENGINE_VERSION, BeamInputError, breedPlan, stripPlan, type BindingSources, type BreedPlan, type BreedRequest, type StripPlan, type StripRequest } from '#shared/beam'
+import { BEAM_ENGINE_VERSION, BeamInputError, breedPlan, parseIon, stripPlan, type BindingSources, type BreedPlan, type BreedRequest, type StripPlan, type StripRequest } from '#shared/beam'
 import { ENGINE_VERSION, subshellLabel } from '#shared/physics'
 import { SCF_METHOD } from '#shared/physics/scf'
 import type { ScfOrbital } from '#shared/physics/scf/types'
@@ -56,7 +56,7 @@ export async function bindingSources(z: number): Promise<BindingSources> {
 export async function runBreed(req: Omit<BreedRequest, 'bindings'>): Promise<BreedPlan> {
   let z: number
   try {
-    z = breedPlan({ ...req, electronEnergyEv: 1, currentDensityACm2: 1 }).ionDetail.z
+    z = parseIon(req.ion).z
   } catch (e) {
     badInput(e)
   }
