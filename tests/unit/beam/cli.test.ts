@@ -39,6 +39,14 @@ describe('npm run beam (scripts/beam.ts as a child process)', () => {
     expect(Object.keys(bad)).toEqual(['input', 'error'])
   }, 60_000)
 
+  it('prints a readable table without --json', () => {
+    const out = run('strip', '48Ca10+', '--energy', '240', '--unit', 'MeV', '--medium', 'C')
+    expect(out.status).toBe(0)
+    expect(out.stdout).toMatch(/48Ca10\+ at [\d.]+ MeV\/u \(240\.000 MeV total/)
+    expect(out.stdout).toContain('Bρ [T·m]')
+    expect(out.stdout).toContain('Schiwietz and P. L. Grande')
+  }, 60_000)
+
   it('refuses a bad option with status 2 before printing anything', () => {
     const out = run('strip', '--json', 'Pb', '--energy', 'fast', '--medium', 'C')
     expect(out.status).toBe(2)
