@@ -1,10 +1,11 @@
-// Database chores for the start/test scripts and for contributors:
+// Database chores for the start/test scripts and for contributors (as the owner role):
 //   tsx scripts/db.ts migrate | rollback | status | seed | make NAME
 import knexFactory from 'knex'
-import config from '../knex.config'
+import config, { MIGRATION_DATABASE_URL } from '../knex.config'
 
+// Migrations and seeds run as the owner role (IONFOLIO_MIGRATION_DATABASE_URL), never as the app.
 const [command, ...rest] = process.argv.slice(2)
-const knex = knexFactory(config)
+const knex = knexFactory({ ...config, connection: MIGRATION_DATABASE_URL })
 
 async function main(): Promise<void> {
   switch (command) {

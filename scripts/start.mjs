@@ -45,8 +45,8 @@ process.on('SIGINT', () => stop(0))
 process.on('SIGTERM', () => stop(0))
 
 try {
-  await dbTask(['migrate'], services.env)
-  await dbTask(['seed'], services.env)
+  await dbTask(['migrate'], services.migrationEnv)
+  await dbTask(['seed'], services.migrationEnv)
   ensureBuild()
 } catch (e) {
   console.error(e.message)

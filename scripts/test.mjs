@@ -26,7 +26,7 @@ async function vitest(env) {
 
 if (unitOnly) process.exit(await runVitest(args, {}))
 
-ensureDebianTools({ '/usr/bin/chromium': 'chromium', '/usr/bin/pdftoppm': 'poppler-utils', '/usr/bin/pdftotext': 'poppler-utils', '/usr/bin/zbarimg': 'zbar-tools' })
+ensureDebianTools({ '/usr/bin/chromium': 'chromium', '/usr/bin/pdftoppm': 'poppler-utils', '/usr/bin/pdftotext': 'poppler-utils', '/usr/bin/pdfsig': 'poppler-utils', '/usr/bin/zbarimg': 'zbar-tools' })
 const { startServices } = await import('./lib/services.mjs')
 
 const tmp = mkdtempSync(path.join(os.tmpdir(), 'ionfolio-test-'))
@@ -36,8 +36,8 @@ const services = await startServices({ storage: tmp, ports, database: 'ionfolio_
 let app = null
 let code = 1
 try {
-  await dbTask(['migrate'], services.env)
-  await dbTask(['seed'], services.env)
+  await dbTask(['migrate'], services.migrationEnv)
+  await dbTask(['seed'], services.migrationEnv)
   ensureBuild()
   const baseUrl = `http://127.0.0.1:${ports.app}`
   const appEnv = {
@@ -55,6 +55,8 @@ try {
     ...services.env,
     IONFOLIO_TEST_BASE_URL: baseUrl,
     IONFOLIO_TEST_MAIL_DIR: services.mailer.spool,
+    // Fixtures and fault set-ups use the superuser; tests/api/db-privileges.test.ts uses the app's login.
+    IONFOLIO_TEST_ADMIN_DATABASE_URL: services.adminDatabaseUrl,
     IONFOLIO_TEST_PG_DATA: services.pg.data,
     IONFOLIO_TEST_PG_PORT: String(ports.postgres),
     IONFOLIO_TEST_TMP: tmp,

@@ -1,3 +1,4 @@
+import { formatDay } from '#shared/format/datetime'
 import { isotopeLabel } from '#shared/samples/nuclide'
 
 /** A number with up to `digits` significant digits, trailing zeros dropped (1200, 0.0125). */
@@ -35,11 +36,9 @@ export function compositionSummary(components: readonly { z: number; massNumber:
   return components.map((c) => `${isotopeLabel(c.z, c.massNumber)} ${Number((c.fraction * 100).toPrecision(3))} %`).join(', ')
 }
 
-/** A date as the lab reads it (1 Dec 2026), from 'YYYY-MM-DD' or a timestamp. */
+/** A day as the whole product writes it (ISO 8601, 2026-12-01), from 'YYYY-MM-DD' or a timestamp. */
 export function formatDate(d: string | Date | null | undefined): string {
-  if (!d) return '—'
-  const date = typeof d === 'string' && /^\d{4}-\d{2}-\d{2}$/.test(d) ? new Date(`${d}T12:00:00Z`) : new Date(d)
-  return date.toLocaleDateString('en-GB', { day: 'numeric', month: 'short', year: 'numeric', timeZone: typeof d === 'string' && d.length === 10 ? 'UTC' : undefined })
+  return formatDay(d)
 }
 
 /** Days from today to a 'YYYY-MM-DD' date (negative when past). */

@@ -26,10 +26,10 @@ export async function withStack<T>(work: (stack: Stack) => Promise<T>, prepare?:
   const ports = { postgres: await freePort(), s3: await freePort(), smtp: await freePort(), app: await freePort() }
   const services = await startServices({ storage: tmp, ports, database: 'ionfolio_bench', mail: 'spool' })
   let app: ReturnType<typeof startChild> | null = null
-  const db = knexFactory({ client: 'pg', connection: services.env.NUXT_DATABASE_URL, pool: { min: 0, max: 10 } })
+  const db = knexFactory({ client: 'pg', connection: services.adminDatabaseUrl, pool: { min: 0, max: 10 } })
   try {
-    await dbTask(['migrate'], services.env)
-    await dbTask(['seed'], services.env)
+    await dbTask(['migrate'], services.migrationEnv)
+    await dbTask(['seed'], services.migrationEnv)
     if (prepare) await prepare(db)
     ensureBuild()
     const base = `http://127.0.0.1:${ports.app}`

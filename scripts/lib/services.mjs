@@ -1,9 +1,11 @@
 // The three local services together: PostgreSQL, the object-store stand-in and a mail fake,
-// and the NUXT_* environment that points the app (and the seeds) at them.
+// and the NUXT_* environment that points the app at them (`migrationEnv` adds the owner's
+// connection for migrations and seeds).
 import path from 'node:path'
 import { startPostgres, clusterDir } from './postgres.mjs'
 import { startObjectStore } from './objectstore.mjs'
 import { startMailInbox, startMailSpool } from './mail.mjs'
+import { ensureSigningKey } from './signing.mjs'
 
 /** Starts all three; `mail` is 'inbox' (demo, web UI) or 'spool' (tests, JSON files). */
 export async function startServices({ storage, ports, database, mail }) {
@@ -15,6 +17,7 @@ export async function startServices({ storage, ports, database, mail }) {
     const pg = startPostgres({ dir: clusterDir(path.join(storage, 'postgres')), port: ports.postgres })
     started.push(pg)
     pg.ensureDatabase(database)
+    pg.ensureRoles(database)
     const store = await startObjectStore({ port: ports.s3, directory: path.join(storage, 'objects') })
     started.push(store)
     const mailer =
@@ -23,7 +26,7 @@ export async function startServices({ storage, ports, database, mail }) {
         : await startMailSpool({ port: ports.smtp, spool: path.join(storage, 'mail') })
     started.push(mailer)
     const env = {
-      NUXT_DATABASE_URL: pg.url(database),
+      NUXT_DATABASE_URL: pg.roleUrl('app', database),
       NUXT_S3_END_POINT: '127.0.0.1',
       NUXT_S3_PORT: String(ports.s3),
       NUXT_S3_USE_SSL: 'false',
@@ -32,8 +35,12 @@ export async function startServices({ storage, ports, database, mail }) {
       NUXT_S3_BUCKET: 'ionfolio',
       NUXT_SMTP_HOST: '127.0.0.1',
       NUXT_SMTP_PORT: String(ports.smtp),
+      // The local, self-signed certificate-signing key, made on first start (scripts/lib/signing.mjs).
+      ...ensureSigningKey(path.join(storage, 'signing')),
     }
-    return { pg, store, mailer, env, stop: stopAll }
+    // Migrations and seeds run as the owner; the app gets only `env` and never the owner's login.
+    const migrationEnv = { ...env, IONFOLIO_MIGRATION_DATABASE_URL: pg.roleUrl('owner', database) }
+    return { pg, store, mailer, env, migrationEnv, adminDatabaseUrl: pg.url(database), stop: stopAll }
   } catch (e) {
     await stopAll()
     throw e

@@ -13,7 +13,7 @@ export interface AuditEntry {
  * Appends one row to the audit trail inside the caller's transaction, so the record and the
  * change it describes are committed (or rolled back) together.
  */
-export async function writeAudit(trx: Knex | Knex.Transaction, event: H3Event | null, entry: AuditEntry, actor?: { id: string; email: string } | null): Promise<void> {
+export async function writeAudit(trx: Knex | Knex.Transaction, event: H3Event | null, entry: AuditEntry, actor?: { id: string | null; email: string | null } | null): Promise<void> {
   const who = actor ?? (event?.context.user ? { id: event.context.user.id, email: event.context.user.email } : null)
   await trx('audit_log').insert({
     actor_id: who?.id ?? null,

@@ -1,7 +1,10 @@
-import { Lucia, type Session, type User } from 'lucia'
+import { Lucia, TimeSpan, type Session, type User } from 'lucia'
 import { NodePostgresAdapter } from '@lucia-auth/adapter-postgresql'
 import pg from 'pg'
 import type { Role } from '#shared/auth/roles'
+
+/** How long a session lasts after its last use. */
+export const SESSION_HOURS = 12
 
 let pool: pg.Pool | null = null
 let lucia: Lucia<Record<never, never>, DatabaseUserAttributes> | null = null
@@ -30,10 +33,12 @@ export function useLucia() {
       // an idle client lost its server (database restart); the pool replaces it on next use
     })
     lucia = new Lucia(new NodePostgresAdapter(pool, { user: 'users', session: 'sessions' }), {
-      sessionExpiresIn: undefined,
+      // A session lasts 12 hours from its last use (Lucia extends it past half-time), and its
+      // cookie carries the same expiry, so the browser forgets it when the server does.
+      sessionExpiresIn: new TimeSpan(SESSION_HOURS, 'h'),
       sessionCookie: {
         name: 'ionfolio_session',
-        expires: false,
+        expires: true,
         attributes: { secure: cookieSecure(), sameSite: 'lax' },
       },
       getUserAttributes: (a) => ({ email: a.email, name: a.name, role: a.role, active: a.active }),

@@ -77,8 +77,8 @@ export async function issueCertificate(event: H3Event, user: User, type: Subject
       })
       const digest = payloadDigest(payload)
       const links = verifyLinks(number, digest)
-      const pdf = await renderDocument(certificateDocument(payload as unknown as CertificatePayload, digest, links.url, links.page))
-      await storePdf(key, pdf, pdfFileName(number, version))
+      const pdf = await signPdf(await renderDocument(certificateDocument(payload as unknown as CertificatePayload, digest, links.url, links.page)), number)
+      await storePdf(event, key, pdf, pdfFileName(number, version))
       stored = true
 
       if (current) {
@@ -121,12 +121,7 @@ export async function issueCertificate(event: H3Event, user: User, type: Subject
   }
 }
 
-async function storePdf(key: string, pdf: Buffer, fileName: string): Promise<void> {
-  const store = useObjectStore()
-  try {
-    await store.putObject(await useBucket(), key, pdf, pdf.length, { 'Content-Type': 'application/pdf', 'Content-Disposition': `attachment; filename="${fileName}"` })
-  } catch {
-    await removeStoredObject(key)
-    throw createError({ statusCode: 502, statusMessage: 'Bad Gateway', message: 'The file store did not accept the certificate; nothing was issued. Try again shortly.' })
-  }
+function storePdf(event: H3Event, key: string, pdf: Buffer, fileName: string): Promise<void> {
+  return putObjectTimed(event, key, pdf, pdf.length, { 'Content-Type': 'application/pdf', 'Content-Disposition': `attachment; filename="${fileName}"` }, () =>
+    createError({ statusCode: 502, statusMessage: 'Bad Gateway', message: 'The file store did not accept the certificate; nothing was issued. Try again shortly.' }))
 }

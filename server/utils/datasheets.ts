@@ -9,7 +9,7 @@ import Busboy from 'busboy'
 import type { H3Event } from 'h3'
 import type { Knex } from 'knex'
 import type { DatasheetRow } from '#shared/types/db'
-import { DATASHEET_ACCEPTED_TEXT, DATASHEET_KINDS, DATASHEET_MAX_BYTES, TextChecker, cleanFileName, contentDisposition, kindFromName, magicMatches, type DatasheetKind } from '#shared/samples/filetypes'
+import { DATASHEET_ACCEPTED_TEXT, DATASHEET_KINDS, DATASHEET_MAX_BYTES, DATASHEET_MAX_TEXT, TextChecker, cleanFileName, contentDisposition, kindFromName, magicMatches, type DatasheetKind } from '#shared/samples/filetypes'
 
 /** A file received and checked, waiting in a temporary file to go to the object store. */
 export interface ReceivedFile {
@@ -37,15 +37,21 @@ export async function receiveUpload(event: H3Event): Promise<ReceivedFile> {
   const req = event.node.req
   if (!/^multipart\/form-data/i.test(req.headers['content-type'] ?? '')) refuse(415, 'Send the file as multipart/form-data in a field named "file"')
   if (Number(req.headers['content-length'] ?? 0) > DATASHEET_MAX_BYTES + FRAMING_BYTES) {
-    setResponseHeader(event, 'Connection', 'close')
-    refuse(413, `The file is larger than 25 MB; accepted: ${DATASHEET_ACCEPTED_TEXT}`)
+    refuse(413, `The file is larger than ${DATASHEET_MAX_TEXT}; accepted: ${DATASHEET_ACCEPTED_TEXT}`)
   }
   const tmpPath = path.join(os.tmpdir(), `ionfolio-upload-${randomUUID()}`)
   let problem: { status: number; message: string } | null = null
   let received: Omit<ReceivedFile, 'tmpPath'> | null = null
   const writes: Promise<void>[] = []
 
-  const parser = Busboy({ headers: req.headers, defParamCharset: 'utf8', limits: { files: 1, fileSize: DATASHEET_MAX_BYTES, fields: 10, parts: 12 } })
+  let parser: ReturnType<typeof Busboy>
+  try {
+    parser = Busboy({ headers: req.headers, defParamCharset: 'utf8', limits: { files: 1, fileSize: DATASHEET_MAX_BYTES, fields: 10, parts: 12 } })
+  } catch {
+    refuse(400, 'The multipart request has no boundary; send the file as multipart/form-data in a field named "file"')
+  }
+  // The file streams being written, so an aborted request can close them at once.
+  const open: NodeJS.ReadableStream[] = []
   parser.on('file', (field, stream, info) => {
     if (field !== 'file' || received || problem) {
       stream.resume()
@@ -58,6 +64,7 @@ export async function receiveUpload(event: H3Event): Promise<ReceivedFile> {
       stream.resume()
       return
     }
+    open.push(stream)
     const hash = createHash('sha256')
     const text = DATASHEET_KINDS[kind].magic ? null : new TextChecker()
     let size = 0
@@ -72,7 +79,7 @@ export async function receiveUpload(event: H3Event): Promise<ReceivedFile> {
       },
     })
     stream.on('limit', () => {
-      problem = { status: 413, message: `The file is larger than 25 MB; accepted: ${DATASHEET_ACCEPTED_TEXT}` }
+      problem = { status: 413, message: `The file is larger than ${DATASHEET_MAX_TEXT}; accepted: ${DATASHEET_ACCEPTED_TEXT}` }
     })
     writes.push(
       pipeline(stream, check, createWriteStream(tmpPath)).then(() => {
@@ -90,11 +97,19 @@ export async function receiveUpload(event: H3Event): Promise<ReceivedFile> {
       parser.on('close', resolve)
       parser.on('error', reject)
       req.on('error', reject)
+      // A client that goes away mid-upload: stop waiting, close the file, remove it (below).
+      req.on('aborted', () => reject(new Error('aborted')))
+      req.on('close', () => {
+        if (!req.complete) reject(new Error('aborted'))
+      })
       req.pipe(parser)
     }).catch(() => {
+      req.unpipe(parser)
+      for (const s of open) (s as NodeJS.ReadableStream & { destroy: (e?: Error) => void }).destroy(new Error('upload stopped'))
       problem ??= { status: 400, message: 'The upload could not be read as multipart/form-data' }
     })
-    await Promise.all(writes)
+    const settled = await Promise.allSettled(writes)
+    if (!problem && settled.some((r) => r.status === 'rejected')) problem = { status: 400, message: 'The upload could not be read as multipart/form-data' }
     if (problem) refuse((problem as { status: number }).status, (problem as { message: string }).message)
     if (!received) refuse(400, 'Send the file in a multipart field named "file"')
     return { tmpPath, ...(received as Omit<ReceivedFile, 'tmpPath'>) }
@@ -111,29 +126,14 @@ export function discardUpload(file: ReceivedFile): Promise<void> {
 
 /**
  * Puts a received file into the object store under `key`. When the store fails, any part of the
- * object that may have landed is removed and the caller gets a 502: nothing to point at, nothing left.
+ * object that may have landed is removed and the caller gets a 502 (or 503 when the store is
+ * silent): nothing to point at, nothing left.
  */
-export async function storeUpload(file: ReceivedFile, key: string): Promise<void> {
-  const store = useObjectStore()
-  try {
-    const bucket = await useBucket()
-    await store.putObject(bucket, key, createReadStream(file.tmpPath), file.size, {
-      'Content-Type': DATASHEET_KINDS[file.kind].contentType,
-      'Content-Disposition': contentDisposition(file.originalName),
-    })
-  } catch {
-    await removeStoredObject(key)
-    throw createError({ statusCode: 502, statusMessage: 'Bad Gateway', message: 'The file store did not accept the file; nothing was saved. Try again shortly.' })
-  }
-}
-
-/** Removes an object, ignoring a store that is down or an object that is not there. */
-export async function removeStoredObject(key: string): Promise<void> {
-  try {
-    await useObjectStore().removeObject(await useBucket(), key)
-  } catch {
-    // the store is unreachable or never had it; there is nothing more we can do from here
-  }
+export async function storeUpload(event: H3Event, file: ReceivedFile, key: string): Promise<void> {
+  await putObjectTimed(event, key, createReadStream(file.tmpPath), file.size, {
+    'Content-Type': DATASHEET_KINDS[file.kind].contentType,
+    'Content-Disposition': contentDisposition(file.originalName),
+  }, () => createError({ statusCode: 502, statusMessage: 'Bad Gateway', message: 'The file store did not accept the file; nothing was saved. Try again shortly.' }))
 }
 
 /** A datasheet as the API answers it. */

@@ -63,7 +63,7 @@ export function isDatabaseUnavailable(error: unknown): boolean {
   let e: any = error
   for (let depth = 0; e && depth < 5; depth++) {
     if (UNAVAILABLE_CODES.has(e.code)) return true
-    if (typeof e.message === 'string' && /Knex: Timeout acquiring a connection|Connection terminated/.test(e.message)) return true
+    if (typeof e.message === 'string' && /Knex: Timeout acquiring a connection|Connection terminated|Client has encountered a connection error|Connection ended unexpectedly|terminating connection due to administrator command/.test(e.message)) return true
     if (Array.isArray(e.errors) && e.errors.some(isDatabaseUnavailable)) return true
     e = e.cause
   }

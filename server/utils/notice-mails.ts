@@ -69,3 +69,15 @@ export function overdueMail(c: { code: string; name: string; holder: string; run
 <p><a href="${e(link)}">Check it back in on its bench card</a></p>${f.html}`,
   }
 }
+
+/** To the managers: a stored file no longer matches the digest its record holds; it was not served. */
+export function storeMismatchMail(c: { what: string; label: string; key: string; expected: string; finding: string; at: string }): Mail {
+  const f = footer()
+  return {
+    subject: `Stored file altered or missing: ${c.what} ${c.label}`,
+    text: [`At ${c.at} Ionfolio refused to serve the ${c.what} ${c.label}: the object in the file store does not match its record.`, '', `Object key: ${c.key}`, `SHA-256 on record: ${c.expected}`, c.finding, '', 'Nothing was served. Restore the object from a backup and check who can write to the bucket.', f.text].join('\n'),
+    html: `<p>At ${e(c.at)} Ionfolio refused to serve the ${e(c.what)} <strong>${e(c.label)}</strong>: the object in the file store does not match its record.</p>
+<p>Object key: <code>${e(c.key)}</code><br>SHA-256 on record: <code>${e(c.expected)}</code><br>${e(c.finding)}</p>
+<p>Nothing was served. Restore the object from a backup and check who can write to the bucket.</p>${f.html}`,
+  }
+}

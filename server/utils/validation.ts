@@ -1,5 +1,6 @@
 import type { H3Event } from 'h3'
 import type { z } from 'zod'
+import { findBadText } from '#shared/schemas/common'
 
 function invalid(error: z.ZodError): never {
   throw createError({
@@ -11,6 +12,8 @@ function invalid(error: z.ZodError): never {
 }
 
 function check<S extends z.ZodType>(schema: S, value: unknown): z.output<S> {
+  const bad = findBadText(value)
+  if (bad) throw createError({ statusCode: 400, statusMessage: 'Invalid input', message: 'Invalid input', data: { issues: [bad] } })
   const parsed = schema.safeParse(value)
   if (!parsed.success) invalid(parsed.error)
   return parsed.data
@@ -21,7 +24,8 @@ export async function readValid<S extends z.ZodType>(event: H3Event, schema: S):
   let body: unknown
   try {
     body = await readBody(event)
-  } catch {
+  } catch (e) {
+    if ((e as { statusCode?: number }).statusCode === 413) throw e
     throw createError({ statusCode: 400, statusMessage: 'Malformed body', message: 'The request body is not valid JSON' })
   }
   return check(schema, body ?? {})

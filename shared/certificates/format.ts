@@ -1,5 +1,6 @@
 // Number and date formatting for certificates, labels and notices: the same text everywhere a
 // value is printed, on the server (PDF, mail) and in the pages.
+import { formatWhen } from '../format/datetime'
 
 const SUP: Record<string, string> = { '-': '⁻', '0': '⁰', '1': '¹', '2': '²', '3': '³', '4': '⁴', '5': '⁵', '6': '⁶', '7': '⁷', '8': '⁸', '9': '⁹' }
 
@@ -30,21 +31,18 @@ export function formatEv(eV: number | null | undefined): string {
   return eV.toPrecision(3)
 }
 
-const MONTHS = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec']
-
-/** "1 Dec 2026" from 'YYYY-MM-DD' or a timestamp (read in UTC, so every server prints the same day). */
+/** "2026-12-01" (ISO 8601) from 'YYYY-MM-DD' or a timestamp (read in UTC, so every server prints the same day). */
 export function formatDay(d: string | Date | null | undefined): string {
   if (!d) return '—'
   const iso = typeof d === 'string' ? d : d.toISOString()
   const m = /^(\d{4})-(\d{2})-(\d{2})/.exec(iso)
   if (!m) return '—'
-  return `${Number(m[3])} ${MONTHS[Number(m[2]) - 1]} ${m[1]}`
+  return `${m[1]}-${m[2]}-${m[3]}`
 }
 
-/** "1 Dec 2026, 14:05 UTC". */
+/** "2026-12-01 14:05 UTC": the product's one date-and-time format (shared/format/datetime.ts), in UTC. */
 export function formatInstant(d: string | Date): string {
-  const iso = typeof d === 'string' ? d : d.toISOString()
-  return `${formatDay(iso)}, ${iso.slice(11, 16)} UTC`
+  return formatWhen(d, { zone: 'UTC' })
 }
 
 /** The calendar day `days` after `from` ('YYYY-MM-DD', UTC). */

@@ -4,8 +4,10 @@
  * every byte (valid UTF-8, no control characters) must agree, whatever the name says.
  */
 
-/** 25 MB (25 × 2²⁰ bytes): a scanned certificate of several pages fits; a video does not. */
-export const DATASHEET_MAX_BYTES = 25 * 1024 * 1024
+/** 25 MB, decimal (25 000 000 bytes), as the text says: a scanned certificate of several pages fits; a video does not. */
+export const DATASHEET_MAX_BYTES = 25_000_000
+/** The limit as people read it, made from the number the check uses, so the two never differ. */
+export const DATASHEET_MAX_TEXT = `${DATASHEET_MAX_BYTES / 1_000_000} MB`
 
 export type DatasheetKind = 'pdf' | 'png' | 'jpeg' | 'csv' | 'text'
 
@@ -19,7 +21,7 @@ export const DATASHEET_KINDS: Record<DatasheetKind, { label: string; contentType
 
 /** For a file input's `accept` attribute and for messages. */
 export const DATASHEET_ACCEPT = Object.values(DATASHEET_KINDS).flatMap((k) => k.extensions).join(',')
-export const DATASHEET_ACCEPTED_TEXT = 'PDF, PNG, JPEG, CSV or plain text (.pdf, .png, .jpg, .csv, .txt), at most 25 MB'
+export const DATASHEET_ACCEPTED_TEXT = `PDF, PNG, JPEG, CSV or plain text (.pdf, .png, .jpg, .csv, .txt), at most ${DATASHEET_MAX_TEXT}`
 
 /** The kind a file name claims, from its extension; null for anything not on the list. */
 export function kindFromName(name: string): DatasheetKind | null {

@@ -38,3 +38,18 @@ export const UpdateUserBody = z
 
 export type SignInInput = z.infer<typeof SignInBody>
 export type InviteInput = z.infer<typeof InviteBody>
+
+export const ChangePasswordBody = z.object({
+  currentPassword: z.string().min(1, 'Enter your current password').max(1024),
+  newPassword: Password,
+})
+
+export const ResetRequestBody = z.object({ email: Email })
+
+export const ResetCompleteBody = z.object({
+  token: z.string().min(20).max(200),
+  password: Password,
+})
+
+/** Inviting again: `resend` sends a fresh link to someone already invited (the old link stops working). */
+export const InviteAgainBody = InviteBody.extend({ resend: z.boolean().optional() })

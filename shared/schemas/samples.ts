@@ -37,8 +37,8 @@ export const ComponentSchema = z.strictObject({
   fraction: z.preprocess(toNumber, z.number({ error: 'Enter the fraction as a number' }).gt(0, 'A fraction is more than 0').lte(1, 'A fraction is at most 1')),
   basis: z.enum(FRACTION_BASES, { error: 'The basis is atom or mass' }),
   enrichmentPercent: quantity('The enrichment', (n) => n.gt(0, 'Enrichment is more than 0 %').lte(100, 'Enrichment is at most 100 %')).optional().default(null),
-  fractionUncertainty: quantity('The uncertainty', (n) => n.min(0, 'An uncertainty is not negative')).optional().default(null),
-  enrichmentUncertainty: quantity('The uncertainty', (n) => n.min(0, 'An uncertainty is not negative')).optional().default(null),
+  fractionUncertainty: quantity('The uncertainty', (n) => n.min(0, 'An uncertainty is not negative').max(1e9, 'The uncertainty must be at most 10⁹ µg/cm²')).optional().default(null),
+  enrichmentUncertainty: quantity('The uncertainty', (n) => n.min(0, 'An uncertainty is not negative').max(1e9, 'The uncertainty must be at most 10⁹ µg/cm²')).optional().default(null),
 })
 export type ComponentBody = z.output<typeof ComponentSchema>
 
@@ -86,11 +86,11 @@ const SampleFields = z.strictObject({
   formula: text(100).refine((f) => f === null || !formulaProblem(f), { error: (i) => formulaProblem(String(i.input)) ?? 'Not a formula' }),
   form: z.enum(SAMPLE_FORMS, { error: `The form is one of: ${SAMPLE_FORMS.join(', ')}` }),
   status: z.enum(EDITABLE_STATUSES, { error: `The status is one of: ${EDITABLE_STATUSES.join(', ')} (retire a sample with the retire action)` }),
-  arealDensity: quantity('The areal density', (n) => n.gt(0, 'The areal density is more than 0')),
-  arealDensityUncertainty: quantity('The uncertainty', (n) => n.min(0, 'An uncertainty is not negative')),
-  thickness: quantity('The thickness', (n) => n.gt(0, 'The thickness is more than 0')),
-  bulkDensity: quantity('The bulk density', (n) => n.gt(0, 'The bulk density is more than 0').max(25, 'No material is denser than 25 g/cm³')),
-  massMg: quantity('The mass', (n) => n.min(0, 'The mass is not negative')),
+  arealDensity: quantity('The areal density', (n) => n.gt(0, 'The areal density must be more than 0').max(1e9, 'The areal density must be at most 10⁹ µg/cm² (1 kg/cm²)')),
+  arealDensityUncertainty: quantity('The uncertainty', (n) => n.min(0, 'An uncertainty is not negative').max(1e9, 'The uncertainty must be at most 10⁹ µg/cm²')),
+  thickness: quantity('The thickness', (n) => n.gt(0, 'The thickness must be more than 0').max(1e10, 'The thickness must be at most 10¹⁰ nm (10 m)')),
+  bulkDensity: quantity('The bulk density', (n) => n.gt(0, 'The bulk density must be more than 0').max(25, 'No material is denser than 25 g/cm³')),
+  massMg: quantity('The mass', (n) => n.min(0, 'The mass is not negative').max(1e9, 'The mass must be at most 10⁹ mg (1 t)')),
   backing: text(200),
   supplier: text(200),
   lot: text(100),
@@ -100,7 +100,7 @@ const SampleFields = z.strictObject({
   hazardStatements,
   radioactive: z.boolean({ error: 'Radioactive is true or false' }),
   nuclide,
-  activityBq: quantity('The activity', (n) => n.gt(0, 'The activity is more than 0 Bq')),
+  activityBq: quantity('The activity', (n) => n.gt(0, 'The activity must be more than 0 Bq').max(1e18, 'The activity must be at most 10¹⁸ Bq')),
   notes: text(4000),
   components: z.array(ComponentSchema).max(40, 'At most 40 components').superRefine(checkComponents),
 })

@@ -99,8 +99,8 @@ describe('failed sign-in limits (5 in 15 minutes)', () => {
       expect(Number(blocked.headers.get('retry-after'))).toBeGreaterThan(0)
       expect(Number(blocked.headers.get('retry-after'))).toBeLessThanOrEqual(15 * 60)
     } finally {
-      // Leave the demo auditor usable for the other tests.
-      await testDb()('sign_in_failures').where({ email }).delete()
+      // Leave the demo auditor usable for the other tests: lift the lock (the failure rows stay).
+      await testDb()('sign_in_throttle').where({ key: `account:${email}` }).update({ attempts: 0, locked_until: null })
     }
   })
 

@@ -16,7 +16,8 @@ afterAll(closeTestDb)
 async function verify(number: string, digest?: string) {
   const r = await new Client().get(`/api/public/verify/${encodeURIComponent(number)}${digest === undefined ? '' : `?digest=${encodeURIComponent(digest)}`}`)
   expect(r.status).toBe(200)
-  expect(Object.keys(r.body)).toEqual(['status'])
+  // Without the matching digest the answer is one word; with it, what the certificate itself says.
+  expect(Object.keys(r.body)).toEqual(r.body.status === 'unknown' ? ['status'] : ['status', 'certified', 'pdfSha256'])
   return r.body.status as string
 }
 
@@ -39,6 +40,21 @@ describe('the public verification route', () => {
     expect(await verify(current.number, current.sha256)).toBe('genuine')
     expect(await verify(superseded.number, superseded.sha256)).toBe('superseded')
     expect(await verify(revoked.number, revoked.sha256)).toBe('revoked')
+  })
+
+  it('after a match, shows the certified values from the frozen payload and the issued PDF\'s SHA-256', async () => {
+    const r = await new Client().get(`/api/public/verify/${encodeURIComponent(current.number)}?digest=${current.sha256}`)
+    const pdf = (await c.auditor.get(`/api/certificates/${current.id}/pdf`)).body as Buffer
+    expect(r.body.pdfSha256).toBe(createHash('sha256').update(pdf).digest('hex'))
+    const certified = r.body.certified
+    expect(certified).toMatchObject({ number: current.number, version: 2, title: 'Certificate of a target sample' })
+    expect(certified.subject).toMatch(new RegExp(`^${current.subjectLabel.split(' ')[0]} · `))
+    const values = Object.fromEntries(certified.values.map((v: { label: string; value: string }) => [v.label, v.value]))
+    // certifiableSample: 500 ± 15 µg/cm², ⁵⁸Ni at 99.61 ± 0.05 % enrichment, 2.5 mg (tests/support/certificates.ts).
+    expect(values['Areal density']).toBe('500 ± 15 µg/cm²')
+    expect(values['Mass']).toBe('2.5 mg')
+    expect(Object.entries(values).find(([k]) => k.includes('fraction'))![1]).toContain('enrichment 99.61 ± 0.05 %')
+    expect(certified.validUntil).not.toBe('—')
   })
 
   it('never answers genuine for a digest that does not match', async () => {

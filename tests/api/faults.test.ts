@@ -19,6 +19,7 @@ describe('with the database down', () => {
       const users = await manager.get('/api/users')
       expect(users.status).toBe(503)
       expect(users.body.message).toMatch(/database/i)
+      expect(Number(users.headers.get('retry-after'))).toBeGreaterThan(0)
     } finally {
       pg.start()
     }
@@ -32,3 +33,35 @@ describe('with the database down', () => {
     expect(after.body.total).toBe(before.body.total)
   })
 })
+
+describe('with the database stopped in the middle of an import', () => {
+  it('answers 503 with Retry-After, and not one row of the file is in the stock afterwards', async () => {
+    const data = process.env.IONFOLIO_TEST_PG_DATA!
+    const pg = startPostgres({ dir: path.dirname(data), port: Number(process.env.IONFOLIO_TEST_PG_PORT) })
+    const manager = await signedIn('manager')
+    const tag = `midimport${Date.now()}`
+    const rows = Array.from({ length: 3000 }, (_, i) => `${tag} foil ${i},Nickel metal,foil,Ni 1`)
+    const csv = ['name,material,form,composition', ...rows].join('\n')
+    expect((await manager.post('/api/samples/import?dryRun=true', csv, { 'content-type': 'text/csv' })).body.valid).toBe(true)
+    const importing = manager.post('/api/samples/import', csv, { 'content-type': 'text/csv' })
+    // stop the database once the import is writing (its rows are not visible before it commits)
+    await new Promise((r) => setTimeout(r, 1500))
+    pg.stop()
+    let reply
+    try {
+      reply = await importing
+    } finally {
+      pg.start()
+    }
+    expect(reply.status, JSON.stringify(reply.body)).toBe(503)
+    expect(Number(reply.headers.get('retry-after'))).toBeGreaterThan(0)
+    let count = -1
+    for (let i = 0; i < 40 && count < 0; i++) {
+      const r = await manager.get(`/api/samples?q=${tag}`)
+      if (r.status === 200) count = r.body.total
+      else await new Promise((res) => setTimeout(res, 250))
+    }
+    expect(count).toBe(0)
+  })
+})
+

@@ -25,7 +25,7 @@ const MATRIX: Array<{ route: string; method: string; body?: unknown; expect: Rec
   { method: 'GET', route: `/api/samples/${randomUUID()}`, expect: { manager: 404, scientist: 404, technician: 404, auditor: 404, anonymous: 401 } },
   { method: 'GET', route: '/api/samples/by-code/S-1999-999999', expect: { manager: 404, scientist: 404, technician: 404, auditor: 404, anonymous: 401 } },
   { method: 'PATCH', route: `/api/samples/${randomUUID()}`, body: { version: 1, name: 'x' }, expect: { manager: 404, scientist: 403, technician: 403, auditor: 403, anonymous: 401 } },
-  { method: 'DELETE', route: `/api/samples/${randomUUID()}`, expect: { manager: 404, scientist: 403, technician: 403, auditor: 403, anonymous: 401 } },
+  { method: 'DELETE', route: `/api/samples/${randomUUID()}?version=1`, expect: { manager: 404, scientist: 403, technician: 403, auditor: 403, anonymous: 401 } },
   { method: 'GET', route: `/api/samples/${randomUUID()}/history`, expect: { manager: 404, scientist: 404, technician: 404, auditor: 404, anonymous: 401 } },
   { method: 'POST', route: `/api/samples/${randomUUID()}/datasheets`, expect: { manager: 404, scientist: 403, technician: 403, auditor: 403, anonymous: 401 } },
   { method: 'GET', route: `/api/datasheets/${randomUUID()}/download`, expect: { manager: 404, scientist: 404, technician: 404, auditor: 404, anonymous: 401 } },
@@ -63,6 +63,10 @@ const MATRIX: Array<{ route: string; method: string; body?: unknown; expect: Rec
   { method: 'POST', route: '/api/beam/plans', body: { ion: '' }, expect: { manager: 400, scientist: 400, technician: 403, auditor: 403, anonymous: 401 } },
   { method: 'GET', route: `/api/beam/plans/${randomUUID()}`, expect: { manager: 404, scientist: 404, technician: 404, auditor: 404, anonymous: 401 } },
   { method: 'GET', route: `/api/beam/plans/${randomUUID()}/rerun`, expect: { manager: 404, scientist: 404, technician: 404, auditor: 404, anonymous: 401 } },
+  { method: 'POST', route: '/api/auth/password', body: {}, expect: { manager: 400, scientist: 400, technician: 400, auditor: 400, anonymous: 401 } },
+  { method: 'POST', route: '/api/auth/password-reset', body: { email: 'x' }, expect: { manager: 400, scientist: 400, technician: 400, auditor: 400, anonymous: 400 } },
+  { method: 'POST', route: '/api/auth/password-reset/complete', body: { token: 'x' }, expect: { manager: 400, scientist: 400, technician: 400, auditor: 400, anonymous: 400 } },
+  { method: 'POST', route: `/api/users/${randomUUID()}/reset-password`, expect: { manager: 404, scientist: 403, technician: 403, auditor: 403, anonymous: 401 } },
   { method: 'POST', route: '/api/notices/run', expect: { manager: 200, scientist: 403, technician: 403, auditor: 403, anonymous: 401 } },
 ]
 

@@ -63,7 +63,7 @@ describe('a sample from registration to retirement', () => {
       const r = await c[who].get(`/api/samples/${s.id}/history`)
       expect(r.status).toBe(200)
       expect(r.body.items.map((i: { action: string }) => i.action)).toEqual(['sample.updated', 'sample.created'])
-      expect(r.body.items[0]).toMatchObject({ actor: 'Maren Okafor', changes: [{ field: 'name', before: 'Before', after: 'After' }, { field: 'arealDensity', before: 500, after: 480 }] })
+      expect(r.body.items[0]).toMatchObject({ actor: 'Maren Okafor', changes: [{ field: 'name', label: 'name', before: 'Before', after: 'After' }, { field: 'arealDensity', label: 'areal density (µg/cm²)', before: '500', after: '480' }] })
     }
   })
 
@@ -85,7 +85,10 @@ describe('a sample from registration to retirement', () => {
   it('retires instead of deleting, hides retired samples from the default list, and restores on request', async () => {
     const tag = unique()
     const s = await createSample(manager, { name: `Retiree ${tag}` })
-    const retired = await manager.delete(`/api/samples/${s.id}`)
+    const unversioned = await manager.delete(`/api/samples/${s.id}`)
+    expect(unversioned.status).toBe(400)
+    expect(unversioned.body.data.issues[0].path).toBe('version')
+    const retired = await manager.delete(`/api/samples/${s.id}?version=1`)
     expect(retired.status).toBe(200)
     expect(retired.body).toMatchObject({ status: 'retired', version: 2 })
     expect(retired.body.retiredAt).toBeTruthy()

@@ -1,11 +1,11 @@
 import { describe, it, expect, beforeAll, afterAll } from 'vitest'
 import { readFileSync } from 'node:fs'
-import type { Browser } from 'playwright-core'
+import type { Browser, Page } from 'playwright-core'
 import { launch, newContext, signInAs, snap, waitForApp } from '../support/browser'
 import { signedIn, unique, type Client } from '../support/api'
 import { waitForMail } from '../support/mail'
 import { pdfText } from '../support/pdf'
-import { certifiableSample } from '../support/certificates'
+import { certifiableSample, pdfOf } from '../support/certificates'
 
 let browser: Browser
 let manager: Client
@@ -101,6 +101,46 @@ describe('certificates in the browser', () => {
     await page.keyboard.press('Enter')
     await page.locator('[data-testid=verify-answer][data-status=genuine]').waitFor()
     await snap(page, 'verify-genuine-phone')
+    await context.close()
+  })
+
+  it('shows the certified values, and tells the issued PDF from an altered one dropped on the page', async () => {
+    const issued = await pdfOf(manager, cert.id)
+    // One byte changed in the page content: the same size, the same look, not the issued file.
+    const altered = Buffer.from(issued)
+    altered[altered.indexOf('stream', 200, 'latin1') + 20] ^= 0x01
+    const context = await newContext(browser)
+    const page = await context.newPage()
+    await page.goto(`/verify/${cert.number}?digest=${cert.sha256}`)
+    await waitForApp(page)
+    await page.locator('[data-testid=verify-answer][data-status=genuine]').waitFor()
+    const certified = await page.getByTestId('verify-certified').innerText()
+    expect(certified).toContain(`Żółć nickel-58 foil ${tag}`)
+    // certifiableSample's values (tests/support/certificates.ts): 500 ± 15 µg/cm², 2.5 mg.
+    expect(certified).toContain('500 ± 15 µg/cm²')
+    expect(certified).toContain('2.5 mg')
+
+    const drop = async (p: Page, bytes: Buffer, name: string) => {
+      await p.getByTestId('verify-drop').evaluate((zone, { b64, name }) => {
+        const bin = atob(b64)
+        const data = new Uint8Array(bin.length)
+        for (let i = 0; i < bin.length; i++) data[i] = bin.charCodeAt(i)
+        const dt = new DataTransfer()
+        dt.items.add(new File([data], name, { type: 'application/pdf' }))
+        zone.dispatchEvent(new DragEvent('drop', { dataTransfer: dt, bubbles: true, cancelable: true }))
+      }, { b64: bytes.toString('base64'), name })
+    }
+    await drop(page, issued, `${cert.number}-v1.pdf`)
+    await page.locator('[data-testid=verify-file-answer][data-identical=true]').waitFor()
+    await expect(page.getByTestId('verify-file-answer').innerText()).resolves.toContain('Identical to the issued file')
+    await snap(page, 'verify-file-identical-desktop')
+    await drop(page, altered, `${cert.number}-v1.pdf`)
+    await page.locator('[data-testid=verify-file-answer][data-identical=false]').waitFor()
+    await expect(page.getByTestId('verify-file-answer').innerText()).resolves.toContain('Not the issued file')
+    await snap(page, 'verify-file-altered-desktop')
+    // The file picker does the same.
+    await page.getByTestId('verify-file').setInputFiles({ name: 'from-picker.pdf', mimeType: 'application/pdf', buffer: issued })
+    await page.locator('[data-testid=verify-file-answer][data-identical=true]').waitFor()
     await context.close()
   })
 

@@ -21,8 +21,11 @@ export class Client {
   cookie = ''
   address = randomAddress()
 
+  /** `base`: another app instance than the test run's (tests/support/instance.ts). */
+  constructor(readonly base?: string) {}
+
   async request<T = any>(method: string, path: string, body?: unknown, headers: Record<string, string> = {}): Promise<Reply<T>> {
-    const base = testBaseUrl()
+    const base = this.base ?? testBaseUrl()
     const h: Record<string, string> = { 'x-forwarded-for': this.address, origin: base, ...headers }
     if (this.cookie) h.cookie = this.cookie
     let payload: BodyInit | undefined

@@ -1,52 +1,59 @@
-import { z } from 'zod'
-import { stringify } from 'csv-stringify/sync'
 import { CAN } from '#shared/auth/roles'
-import { ListQuery } from '#shared/schemas/common'
-
-const Query = ListQuery.extend({
-  action: z.string().max(60).optional(),
-  entityType: z.string().max(40).optional(),
-  entityId: z.string().max(100).optional(),
-  actor: z.string().max(254).optional(),
-  from: z.iso.date().optional(),
-  to: z.iso.date().optional(),
-  format: z.enum(['json', 'csv']).default('json'),
-})
+import { AuditQuery } from '#shared/schemas/audit'
+import { auditSentence, subjectText } from '#shared/audit/actions'
+import { changeText, describeChanges } from '#shared/audit/changes'
+import { AuditChainWriter } from '#shared/audit/chain'
 
 const CSV_LIMIT = 100_000
 
+// The audit trail for auditors and managers: rows name their records by code and name, changes
+// read as "field: old → new", and the CSV carries a running hash chain (shared/audit/chain.ts).
 export default defineEventHandler(async (event) => {
   requireRole(event, ...CAN.readAudit)
-  const query = queryValid(event, Query)
+  const query = queryValid(event, AuditQuery)
 
   const db = useDb()
-  const filtered = () => db('audit_log').where((b) => {
-    if (query.action) b.where('action', query.action)
-    if (query.entityType) b.where('entity_type', query.entityType)
-    if (query.entityId) b.where('entity_id', query.entityId)
-    if (query.actor) b.whereILike('actor_email', `%${query.actor}%`)
-    if (query.from) b.where('at', '>=', query.from)
-    if (query.to) b.where('at', '<', db.raw(`?::date + 1`, [query.to]))
-    if (query.q) b.where((w) => w.whereILike('action', `%${query.q}%`).orWhereILike('actor_email', `%${query.q}%`).orWhereILike('entity_id', `%${query.q}%`))
-  })
   const order = query.sort === 'at' ? 'asc' : 'desc'
 
   if (query.format === 'csv') {
-    const rows = await filtered().select('*').orderBy('id', order).limit(CSV_LIMIT)
-    const csv = stringify(
-      rows.map((r) => [r.id, new Date(r.at).toISOString(), r.actor_email ?? '', r.action, r.entity_type, r.entity_id ?? '', r.before ? JSON.stringify(r.before) : '', r.after ? JSON.stringify(r.after) : '', r.address ?? '']),
-      { header: true, columns: ['id', 'at', 'actor', 'action', 'entity_type', 'entity_id', 'before', 'after', 'address'] },
-    )
+    const rows = await auditRows(db, query).select(AUDIT_COLUMNS).orderBy('a.id', order).limit(CSV_LIMIT)
+    const chain = new AuditChainWriter()
+    const parts = [chain.header()]
+    for (const r of rows) {
+      const subject = subjectOf(r)
+      const actor = r.actor_name ? `${r.actor_name} <${r.actor_email ?? ''}>` : (r.actor_email ?? '')
+      parts.push(await chain.add([String(r.id), new Date(r.at).toISOString(), actor, r.action, r.entity_type, r.entity_id ?? '', subject ? subjectText(subject) : '', changeText(r.before, r.after), r.address ?? '']))
+    }
+    parts.push(await chain.end())
+    await writeAudit(db, event, { action: 'audit.exported', entityType: 'audit_log', after: { rows: rows.length, lastHash: chain.lastHash } })
     setResponseHeader(event, 'Content-Type', 'text/csv; charset=utf-8')
     setResponseHeader(event, 'Content-Disposition', 'attachment; filename="ionfolio-audit.csv"')
-    await writeAudit(db, event, { action: 'audit.exported', entityType: 'audit_log', after: { rows: rows.length } })
-    return csv
+    setResponseHeader(event, 'X-Audit-Chain-Head', chain.lastHash)
+    return parts.join('')
   }
 
-  const total = await countRows(filtered())
-  const rows = await filtered().select('*').orderBy('id', order).limit(query.pageSize).offset((query.page - 1) * query.pageSize)
+  const total = await countRows(auditRows(db, query))
+  const rows = await auditRows(db, query).select(AUDIT_COLUMNS).orderBy('a.id', order).limit(query.pageSize).offset((query.page - 1) * query.pageSize)
   return {
-    items: rows.map((r) => ({ id: Number(r.id), at: r.at, actor: r.actor_email, action: r.action, entityType: r.entity_type, entityId: r.entity_id, before: r.before, after: r.after, address: r.address })),
+    items: rows.map((r) => {
+      const subject = subjectOf(r)
+      const actorName = (r.actor_name ?? r.actor_email ?? null) as string | null
+      return {
+        id: Number(r.id),
+        at: r.at as Date,
+        actor: r.actor_email as string | null,
+        actorName,
+        action: r.action as string,
+        sentence: auditSentence({ actorName, action: r.action, subject }),
+        subject,
+        changes: describeChanges(r.before, r.after),
+        entityType: r.entity_type as string,
+        entityId: r.entity_id as string | null,
+        before: r.before as unknown,
+        after: r.after as unknown,
+        address: r.address as string | null,
+      }
+    }),
     total,
     page: query.page,
     pageSize: query.pageSize,

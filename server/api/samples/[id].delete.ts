@@ -2,7 +2,8 @@ import { z } from 'zod'
 import { CAN } from '#shared/auth/roles'
 import { IdParam } from '#shared/schemas/common'
 
-const Query = z.object({ version: z.coerce.number().int().min(1).optional() })
+// Retiring is an edit like any other: it names the version the person saw.
+const Query = z.object({ version: z.coerce.number({ error: 'Give the version you retire (version=N)' }).int().min(1) })
 
 // Retiring is the only way a sample leaves the stock. A sample is never deleted: once there are
 // certificates and custody history they point at it, and even now its audit trail does. Until
@@ -15,7 +16,7 @@ export default defineEventHandler(async (event) => {
   const db = useDb()
   const after = await db.transaction(async (trx) => {
     const before = await requireSample(trx, id, { lock: true })
-    if (version !== undefined && before.version !== version) {
+    if (before.version !== version) {
       throw createError({ statusCode: 409, statusMessage: 'Conflict', message: 'Someone changed this sample after you opened it', data: { current: await withDatasheets(trx, before) } })
     }
     if (before.status === 'retired') return before

@@ -19,11 +19,15 @@ export default defineEventHandler(async (event) => {
       throw createError({ statusCode: 409, statusMessage: 'Conflict', message: 'This sample is retired: give it a status to bring it back before changing it', data: { current: await withDatasheets(trx, before) } })
     }
     const given = Object.fromEntries(Object.entries(changes).filter(([, v]) => v !== undefined))
+    // Nothing to change: no write, no new version, no audit row.
+    if (!Object.keys(given).length) return before
     const parsed = SampleBody.safeParse({ ...sampleInputOf(before), ...given })
     if (!parsed.success) {
       throw createError({ statusCode: 400, statusMessage: 'Invalid input', message: 'Invalid input', data: { issues: parsed.error.issues.map((i) => ({ path: i.path.join('.'), message: i.message })) } })
     }
     const data = parsed.data
+    const unchanged = SampleBody.safeParse(sampleInputOf(before))
+    if (unchanged.success && JSON.stringify(unchanged.data) === JSON.stringify(data) && before.status !== 'retired') return before
     await assertPlace(trx, data.locationId)
     const [row] = await trx('samples')
       .where({ id, version })

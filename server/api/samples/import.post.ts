@@ -1,11 +1,14 @@
 import { parse } from 'csv-parse/sync'
 import { CAN } from '#shared/auth/roles'
+import { BODY_LIMITS } from '#shared/schemas/limits'
+import { badTextProblem } from '#shared/schemas/common'
+import { unguardCell } from '#shared/csv/safe'
 import { ImportQuery, SampleBody, type SampleData } from '#shared/schemas/samples'
 import { COLUMN_OF_FIELD, CSV_COLUMNS, REQUIRED_COLUMNS, csvRecordToInput } from '#shared/samples/csv'
 
 // At most this many samples and bytes per file: a few thousand rows of stock.
 const MAX_ROWS = 5_000
-const MAX_BYTES = 5 * 1024 * 1024
+const MAX_BYTES = BODY_LIMITS.csvImport
 
 interface RowError {
   line: number
@@ -40,7 +43,13 @@ async function check(raw: string): Promise<{ errors: RowError[]; rows: number; g
       errors.push({ line, column: '', message: `This row has ${record.length} cells; the header has ${header.length}` })
       continue
     }
-    const { input, problems } = csvRecordToInput(Object.fromEntries(header.map((h, i) => [h, record[i]!])), placeIdByCode)
+    const badCell = record.findIndex((c) => badTextProblem(c))
+    if (badCell >= 0) {
+      errors.push({ line, column: header[badCell] ?? '', message: badTextProblem(record[badCell]!)! })
+      continue
+    }
+    // Cells the export guarded against spreadsheet formulas read back as they were (shared/csv/safe.ts).
+    const { input, problems } = csvRecordToInput(Object.fromEntries(header.map((h, i) => [h, unguardCell(record[i]!)])), placeIdByCode)
     for (const p of problems) errors.push({ line, ...p })
     const result = SampleBody.safeParse(input)
     if (result.success) {

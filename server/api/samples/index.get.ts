@@ -1,3 +1,4 @@
+import { GUARDED_CSV } from '#shared/csv/safe'
 import { stringify } from 'csv-stringify/sync'
 import { CAN } from '#shared/auth/roles'
 import { SampleListQuery } from '#shared/schemas/samples'
@@ -33,7 +34,7 @@ export default defineEventHandler(async (event) => {
         }
         return CSV_COLUMNS.map((c) => values[c] ?? '')
       }),
-      { header: true, columns: [...CSV_COLUMNS] },
+      { ...GUARDED_CSV, header: true, columns: [...CSV_COLUMNS] },
     )
     setResponseHeader(event, 'Content-Type', 'text/csv; charset=utf-8')
     setResponseHeader(event, 'Content-Disposition', 'attachment; filename="ionfolio-samples.csv"')

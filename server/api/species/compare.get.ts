@@ -1,3 +1,4 @@
+import { GUARDED_CSV } from '#shared/csv/safe'
 import { stringify } from 'csv-stringify/sync'
 import { CAN } from '#shared/auth/roles'
 import { COMPARE_LIMIT, CompareQuery } from '#shared/schemas/species'
@@ -53,7 +54,7 @@ export default defineEventHandler(async (event) => {
     setResponseHeader(event, 'Content-Disposition', 'attachment; filename="ionfolio-species-comparison.csv"')
     return stringify(
       rows.map((r) => [r.label, r.spectroscopic, r.z, r.charge, r.core, r.term ?? '', r.isoelectronic ?? '', r.reference ?? '', ...METHOD_NAMES.map((m) => r.estimates[m] ?? ''), r.productionThreshold ?? '']),
-      { header: true, columns: ['species', 'spectroscopic', 'z', 'charge', 'configuration', 'term', 'isoelectronic', 'reference_eV', ...METHOD_NAMES.map((m) => `${m}_eV`), 'production_threshold_eV'] },
+      { ...GUARDED_CSV, header: true, columns: ['species', 'spectroscopic', 'z', 'charge', 'configuration', 'term', 'isoelectronic', 'reference_eV', ...METHOD_NAMES.map((m) => `${m}_eV`), 'production_threshold_eV'] },
     )
   }
   return { methods: METHOD_NAMES, rows }

@@ -1,3 +1,4 @@
+import { GUARDED_CSV } from '#shared/csv/safe'
 import { stringify } from 'csv-stringify/sync'
 import { CAN } from '#shared/auth/roles'
 import { SpeciesListQuery } from '#shared/schemas/species'
@@ -42,7 +43,7 @@ export default defineEventHandler(async (event) => {
     setResponseHeader(event, 'Content-Disposition', 'attachment; filename="ionfolio-species.csv"')
     return stringify(
       rows.map((r: any) => [r.label, r.spectroscopic, r.z, r.charge, r.mass_number ?? '', r.isoelectronic ?? '', r.samples, r.engine ?? '', new Date(r.created_at).toISOString()]),
-      { header: true, columns: ['species', 'spectroscopic', 'z', 'charge', 'mass_number', 'isoelectronic', 'samples', 'engine', 'recorded_at'] },
+      { ...GUARDED_CSV, header: true, columns: ['species', 'spectroscopic', 'z', 'charge', 'mass_number', 'isoelectronic', 'samples', 'engine', 'recorded_at'] },
     )
   }
 

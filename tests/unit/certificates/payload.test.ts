@@ -2,6 +2,7 @@ import { describe, it, expect } from 'vitest'
 import { samplePayload, type CertSampleInput } from '../../../shared/certificates/sample-payload'
 import { speciesPayload } from '../../../shared/certificates/species-payload'
 import { canonicalJson } from '../../../shared/certificates/canonical'
+import { certifiedSummary } from '../../../shared/certificates/summary'
 import { describeSpecies, METHODS, IONISATION_SOURCE } from '../../../shared/physics'
 
 const ctx = { number: 'C-2026-000042', version: 1, labName: 'Larchmere Ion Beam Laboratory', issuedAt: '2026-12-01T10:00:00.000Z', issuer: { name: 'Maren Okafor', role: 'Lab manager' }, replaces: null }
@@ -45,7 +46,7 @@ describe('the payload of a sample certificate', () => {
 
   it('takes the period of validity from the re-certify-by date', () => {
     expect(p.validity.until).toBe('2027-01-15')
-    expect(p.validity.statement).toContain('15 Jan 2027')
+    expect(p.validity.statement).toContain('2027-01-15')
   })
 
   it('carries the hazard statements with their texts and the cautions that defer to the officers', () => {
@@ -88,5 +89,17 @@ describe('the payload of a species certificate', () => {
     expect(p.estimates).toMatch(/estimates/)
     expect(p.storage).toBeNull()
     expect(p.validity.until).toBe('2027-12-01')
+  })
+})
+
+describe('the certified summary the verification page shows', () => {
+  it('reads the values of a sample certificate from its frozen payload, as printed', () => {
+    const p = JSON.parse(canonicalJson(samplePayload(sample, [], ctx)))
+    const s = certifiedSummary(p)
+    expect(s).toMatchObject({ number: 'C-2026-000042', version: 1, subject: 'S-2026-000003 · 58Ni self-supporting foil', issuedOn: '1 Dec 2026', validUntil: '15 Jan 2027', laboratory: 'Larchmere Ion Beam Laboratory' })
+    const values = Object.fromEntries(s.values.map((v) => [v.label, v.value]))
+    expect(values['Areal density']).toBe('500 ± 15 µg/cm²')
+    expect(values['Mass']).toBe('1.8 mg')
+    expect(values['⁵⁸Ni (atom fraction)']).toBe('1, enrichment 99.61 ± 0.05 %')
   })
 })

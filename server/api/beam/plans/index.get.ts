@@ -1,4 +1,5 @@
 import { stringify } from 'csv-stringify/sync'
+import { GUARDED_CSV } from '#shared/csv/safe'
 import { CAN } from '#shared/auth/roles'
 import { getElement } from '#shared/physics'
 import { BeamPlanListQuery } from '#shared/schemas/beam'
@@ -36,7 +37,7 @@ export default defineEventHandler(async (event) => {
     setResponseHeader(event, 'Content-Disposition', 'attachment; filename="ionfolio-beam-plans.csv"')
     return stringify(
       all.map((p) => [p.title, p.ion, p.energyMeVPerU, p.medium, p.chargeState ?? '', p.chargeFraction ?? '', p.rigidityTm ?? '', p.stripperSample?.code ?? '', p.sourceSample?.code ?? '', p.engine, p.createdBy ?? '', new Date(p.createdAt).toISOString()]),
-      { header: true, columns: ['title', 'ion', 'energy_mev_u', 'medium', 'charge_state', 'charge_fraction', 'rigidity_tm', 'stripper_sample', 'source_sample', 'engine', 'created_by', 'created_at'] },
+      { ...GUARDED_CSV, header: true, columns: ['title', 'ion', 'energy_mev_u', 'medium', 'charge_state', 'charge_fraction', 'rigidity_tm', 'stripper_sample', 'source_sample', 'engine', 'created_by', 'created_at'] },
     )
   }
   const total = await countRows(filtered())

@@ -9,14 +9,16 @@ export default defineEventHandler(async (event) => {
   const user = requireRole(event, ...CAN.manageSamples)
   const { id } = paramsValid(event, IdParam)
   const db = useDb()
-  const sample = await db('samples').where({ id }).first('id', 'code')
+  const sample = await db('samples').where({ id }).first('id', 'code', 'status')
   if (!sample) throw createError({ statusCode: 404, statusMessage: 'Not found', message: 'No such sample' })
+  // Refused before a byte of the file is read: a retired sample's record is closed.
+  if (sample.status === 'retired') throw createError({ statusCode: 409, statusMessage: 'Conflict', message: 'This sample is retired; bring it back into the stock before adding datasheets' })
 
   const file = await receiveUpload(event)
   try {
     const datasheetId = randomUUID()
     const key = `datasheets/${id}/${datasheetId}`
-    await storeUpload(file, key)
+    await storeUpload(event, file, key)
     try {
       const row = await db.transaction(async (trx) => {
         const [row] = await trx('datasheets')

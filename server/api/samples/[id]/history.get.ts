@@ -1,21 +1,10 @@
 import { CAN } from '#shared/auth/roles'
 import { IdParam } from '#shared/schemas/common'
+import { describeChanges } from '#shared/audit/changes'
 
 // What the audit trail holds about one sample, for everyone who may read the sample: who did
-// what and when, and which fields changed. The full trail (addresses, every record type) stays
-// with the roles that read the audit trail.
-const HIDDEN = new Set(['version', 'updatedAt', 'createdAt', 'location', 'hazardKinds', 'custody'])
-
-// A place is shown by its path, which people read; the record keeps the id.
-const placeOf = (r: Record<string, unknown>) => (r.location as { path?: string } | null)?.path ?? (r.locationId ? String(r.locationId) : null)
-
-function changedFields(before: Record<string, unknown> | null, after: Record<string, unknown> | null) {
-  if (!before || !after) return []
-  return Object.keys(after)
-    .filter((k) => !HIDDEN.has(k) && JSON.stringify(before[k]) !== JSON.stringify(after[k]))
-    .map((field) => (field === 'locationId' ? { field, before: placeOf(before), after: placeOf(after) } : { field, before: before[field] ?? null, after: after[field] ?? null }))
-}
-
+// what and when, and which fields changed ("field: old → new", shared/audit/changes.ts). The full
+// trail (addresses, every record type) stays with the roles that read the audit trail.
 export default defineEventHandler(async (event) => {
   requireRole(event, ...CAN.readSamples)
   const { id } = paramsValid(event, IdParam)
@@ -33,7 +22,7 @@ export default defineEventHandler(async (event) => {
       at: r.at as Date,
       action: r.action as string,
       actor: (r.actor_name ?? r.actor_email ?? null) as string | null,
-      changes: changedFields(r.before as Record<string, unknown> | null, r.after as Record<string, unknown> | null),
+      changes: r.action === 'sample.created' || r.action === 'sample.imported' || r.action === 'sample.seeded' ? [] : describeChanges(r.before, r.after).filter((l) => l.field !== 'code' && l.field !== 'datasheet'),
       datasheet: r.action === 'sample.datasheet-added' ? ((r.after as { datasheet?: { fileName: string } } | null)?.datasheet?.fileName ?? null) : null,
     })),
   }
