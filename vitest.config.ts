@@ -11,6 +11,9 @@ export default defineConfig({
           name: 'unit',
           include: ['tests/unit/**/*.test.ts'],
           environment: 'node',
+          // The whole-table sweeps (every species, every method) take a few seconds on a quiet
+          // machine; CI's machine is shared, so give them room rather than flaky timeouts.
+          testTimeout: 30_000,
         },
       },
       {

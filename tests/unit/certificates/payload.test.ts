@@ -96,7 +96,7 @@ describe('the certified summary the verification page shows', () => {
   it('reads the values of a sample certificate from its frozen payload, as printed', () => {
     const p = JSON.parse(canonicalJson(samplePayload(sample, [], ctx)))
     const s = certifiedSummary(p)
-    expect(s).toMatchObject({ number: 'C-2026-000042', version: 1, subject: 'S-2026-000003 · 58Ni self-supporting foil', issuedOn: '1 Dec 2026', validUntil: '15 Jan 2027', laboratory: 'Larchmere Ion Beam Laboratory' })
+    expect(s).toMatchObject({ number: 'C-2026-000042', version: 1, subject: 'S-2026-000003 · 58Ni self-supporting foil', issuedOn: '2026-12-01', validUntil: '2027-01-15', laboratory: 'Larchmere Ion Beam Laboratory' })
     const values = Object.fromEntries(s.values.map((v) => [v.label, v.value]))
     expect(values['Areal density']).toBe('500 ± 15 µg/cm²')
     expect(values['Mass']).toBe('1.8 mg')
