@@ -62,6 +62,19 @@ export default defineNuxtConfig({
     },
     // Take the client address from X-Forwarded-For: only behind a trusted load balancer.
     trustProxy: false,
+    // Requests per API token per minute, per app instance (NUXT_TOKEN_RATE_LIMIT).
+    tokenRateLimit: 600,
+    // Background jobs through pg-boss (server/utils/jobs.ts). `precompute`: which elements the app
+    // fills the SCF cache for when the engine version has no complete cache ('1-118', or 'off').
+    jobs: {
+      enabled: true,
+      precompute: '1-118',
+      precomputeBatch: 8,
+      noticesCron: '15 6 * * *',
+      // The store reconciliation only reports (an audit row and a log line); 'off' for none.
+      reconcileCron: '45 5 * * *',
+      pollSeconds: 2,
+    },
     // Empty means "decide from publicBaseUrl": Secure cookies whenever the site is served over https.
     cookieSecure: '',
     public: {
@@ -73,10 +86,9 @@ export default defineNuxtConfig({
   },
   nitro: {
     experimental: { tasks: true },
-    // The daily notices (re-certification due, check-outs overdue, missed certificate notices),
-    // at 06:15 server time. Every instance runs it; the notices table lets each notice out once.
-    // The store reconciliation (storage:reconcile) reports at 05:45; it changes nothing.
-    scheduledTasks: { '15 6 * * *': ['notices:daily'], '45 5 * * *': ['storage:reconcile'] },
+    // The daily notices and the store reconciliation are scheduled through the job queue
+    // (runtimeConfig.jobs, server/utils/jobs.ts), so one instance runs each tick; the Nitro tasks
+    // stay for POST /api/notices/run and for running them by hand.
     serverAssets: [
       { baseName: 'pdf-inter', dir: fontFiles('inter'), pattern: 'inter-{latin,latin-ext,greek}-{400,600}-normal.woff' },
       { baseName: 'pdf-mono', dir: fontFiles('roboto-mono'), pattern: 'roboto-mono-{latin,latin-ext}-{400,700}-normal.woff' },

@@ -26,13 +26,12 @@ for (const [name, port] of Object.entries({ app: PORTS.app, s3: PORTS.s3, smtp: 
 console.log('Starting PostgreSQL, the object store and the mail inbox…')
 const services = await startServices({ storage: STORAGE, ports: PORTS, database: 'ionfolio', mail: 'inbox' })
 let app = null
-let precompute = null
 let stopping = false
 async function stop(code = 0) {
   if (stopping) return
   stopping = true
   console.log('\nStopping…')
-  for (const child of [precompute, app]) {
+  for (const child of [app]) {
     if (child && child.exitCode === null) {
       child.kill('SIGTERM')
       await child.exited
@@ -66,12 +65,8 @@ app.exited.then((code) => {
 })
 await waitFor(async () => (await fetch(`http://127.0.0.1:${PORTS.app}/api/health`)).ok, { timeoutMs: 60_000, what: 'the app server' })
 
-// Fill the SCF cache in the background at low priority, so look-ups and the per-element chart
-// find the self-consistent-field results ready; anything already cached is skipped.
-precompute = startChild('nice', ['-n', '15', process.execPath, '--import', 'tsx', path.join(ROOT, 'scripts', 'precompute.ts'), '--workers', '1'], {
-  prefix: 'precompute',
-  env: { ...process.env, ...services.env },
-})
+// The app itself queues the SCF-cache precompute of a new engine version (server/utils/jobs.ts):
+// its job workers solve it in the background, shared with any other instance on the same database.
 
 console.log(`
   Ionfolio is running at   ${baseUrl}

@@ -48,6 +48,11 @@ try {
     NUXT_PUBLIC_BASE_URL: baseUrl,
     // Tests vary X-Forwarded-For to act as different client addresses for the rate limits.
     NUXT_TRUST_PROXY: 'true',
+    // A low per-token limit, so tests/api/tokens.test.ts can reach it.
+    NUXT_TOKEN_RATE_LIMIT: '60',
+    // No job workers on the shared test server (no precompute of the whole periodic table, no
+    // schedule): tests/api/jobs.test.ts starts two instances of its own that share the jobs.
+    NUXT_JOBS_ENABLED: 'false',
   }
   app = startChild(process.execPath, [path.join(ROOT, '.output', 'server', 'index.mjs')], { prefix: 'app', env: { ...process.env, ...appEnv } })
   await waitFor(async () => (await fetch(`${baseUrl}/api/health`)).ok, { timeoutMs: 60_000, what: 'the app server' })
@@ -60,6 +65,7 @@ try {
     IONFOLIO_TEST_PG_DATA: services.pg.data,
     IONFOLIO_TEST_PG_PORT: String(ports.postgres),
     IONFOLIO_TEST_TMP: tmp,
+    IONFOLIO_TEST_TOKEN_RATE_LIMIT: appEnv.NUXT_TOKEN_RATE_LIMIT,
   })
 } catch (e) {
   console.error(e.message)

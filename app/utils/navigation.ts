@@ -17,4 +17,5 @@ export const NAVIGATION: NavItem[] = [
   { to: '/scan', label: 'Scan', capability: 'custody' },
   { to: '/audit', label: 'Audit trail', capability: 'readAudit' },
   { to: '/people', label: 'People', capability: 'managePeople' },
+  { to: '/jobs', label: 'Jobs', capability: 'viewJobs' },
 ]

@@ -15,6 +15,8 @@ export interface Stack {
   base: string
   /** a Knex pool on the bench database */
   db: Knex
+  /** the NUXT_* settings that point an app server at this stack's services */
+  env: Record<string, string>
   /** the session cookie of the demo person of `role` */
   cookieOf: (role: (typeof DEMO_PEOPLE)[number]['role']) => Promise<string>
 }
@@ -35,7 +37,7 @@ export async function withStack<T>(work: (stack: Stack) => Promise<T>, prepare?:
     const base = `http://127.0.0.1:${ports.app}`
     app = startChild(process.execPath, [path.join(ROOT, '.output', 'server', 'index.mjs')], {
       prefix: 'app',
-      env: { ...process.env, ...services.env, NODE_ENV: 'production', HOST: '127.0.0.1', PORT: String(ports.app), NUXT_PUBLIC_BASE_URL: base },
+      env: { NUXT_JOBS_ENABLED: 'false', ...process.env, ...services.env, NODE_ENV: 'production', HOST: '127.0.0.1', PORT: String(ports.app), NUXT_PUBLIC_BASE_URL: base },
     })
     await waitFor(async () => (await fetch(`${base}/api/health`)).ok, { timeoutMs: 60_000, what: 'the app server' })
     const cookieOf: Stack['cookieOf'] = async (role) => {
@@ -44,7 +46,7 @@ export async function withStack<T>(work: (stack: Stack) => Promise<T>, prepare?:
       if (!r.ok) throw new Error(`could not sign in as ${role}: ${r.status}`)
       return r.headers.getSetCookie().map((c) => c.split(';')[0]).join('; ')
     }
-    return await work({ base, db, cookieOf })
+    return await work({ base, db, cookieOf, env: services.env })
   } finally {
     await db.destroy()
     if (app && app.exitCode === null) {

@@ -68,5 +68,7 @@ declare module 'h3' {
   interface H3EventContext {
     user: User | null
     session: Session | null
+    /** The API token the request came with (null for a cookie session or nobody). */
+    token: { id: string; scope: 'read' | 'read-write'; expiresOn: string } | null
   }
 }

@@ -19,6 +19,14 @@ interface Entry {
 }
 
 const entries = new Map<string, Entry>()
+
+/** A validated API token: its owner, scope and expiry (tokens share the announcements and the TTL). */
+export interface TokenEntry {
+  token: { id: string; scope: 'read' | 'read-write'; expiresOn: string }
+  user: User
+  until: number
+}
+const tokens = new Map<string, TokenEntry>()
 let listening = false
 let client: pg.Client | null = null
 let stopped = false
@@ -42,12 +50,38 @@ export function rememberSession(session: Session, user: User): void {
   entries.set(session.id, { session: { ...session, fresh: false }, user, until: Math.min(Date.now() + TTL_MS, session.expiresAt.getTime()) })
 }
 
+/** A still-valid cached token by the hash of its secret, or null. */
+export function cachedToken(hash: string): TokenEntry | null {
+  if (!listening) return null
+  const hit = tokens.get(hash)
+  if (!hit) return null
+  if (hit.until <= Date.now()) {
+    tokens.delete(hash)
+    return null
+  }
+  return hit
+}
+
+/** Keeps a freshly validated token for a short while. */
+export function rememberToken(hash: string, token: TokenEntry['token'], user: User): void {
+  if (!listening) return
+  if (tokens.size >= MAX_ENTRIES) tokens.delete(tokens.keys().next().value!)
+  tokens.set(hash, { token, user, until: Date.now() + TTL_MS })
+}
+
 function forget(payload: string): void {
   if (payload.startsWith('s:')) entries.delete(payload.slice(2))
-  else if (payload.startsWith('u:')) {
+  else if (payload.startsWith('t:')) {
+    const tokenId = payload.slice(2)
+    for (const [hash, e] of tokens) if (e.token.id === tokenId) tokens.delete(hash)
+  } else if (payload.startsWith('u:')) {
     const userId = payload.slice(2)
     for (const [id, e] of entries) if (e.user.id === userId) entries.delete(id)
-  } else entries.clear()
+    for (const [hash, e] of tokens) if (e.user.id === userId) tokens.delete(hash)
+  } else {
+    entries.clear()
+    tokens.clear()
+  }
 }
 
 /** SQL that announces a session's end; run it inside the transaction that ends the session. */
@@ -60,8 +94,13 @@ export function userChangedNotice(userId: string): [string, string[]] {
   return ['select pg_notify(?, ?)', [CHANNEL, `u:${userId}`]]
 }
 
+/** SQL that announces a token's revocation; run it inside the revoking transaction. */
+export function tokenRevokedNotice(tokenId: string): [string, string[]] {
+  return ['select pg_notify(?, ?)', [CHANNEL, `t:${tokenId}`]]
+}
+
 /** Forgets locally at once (the NOTIFY reaches the other instances, and this one again). */
-export function forgetLocally(kind: 's' | 'u', id: string): void {
+export function forgetLocally(kind: 's' | 'u' | 't', id: string): void {
   forget(`${kind}:${id}`)
 }
 
@@ -75,6 +114,7 @@ export async function listenForSessionEvents(connectionString: string): Promise<
       if (client !== c) return
       listening = false
       entries.clear()
+      tokens.clear()
       client = null
       c.end().catch(() => {})
       if (!stopped) setTimeout(connect, 1_000)
@@ -87,6 +127,7 @@ export async function listenForSessionEvents(connectionString: string): Promise<
       await c.query(`listen ${CHANNEL}`)
       client = c
       entries.clear()
+      tokens.clear()
       listening = true
     } catch {
       c.end().catch(() => {})
@@ -101,6 +142,7 @@ export async function stopSessionEvents(): Promise<void> {
   stopped = true
   listening = false
   entries.clear()
+  tokens.clear()
   const c = client
   client = null
   await c?.end().catch(() => {})

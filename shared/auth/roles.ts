@@ -29,6 +29,10 @@ export const CAN = {
   runNotices: ['manager'],
   readAudit: ['manager', 'auditor'],
   managePeople: ['manager'],
+  useTokens: everyone,
+  manageAllTokens: ['manager'],
+  viewJobs: ['manager'],
+  readApiDocs: everyone,
 } as const satisfies Record<string, readonly Role[]>
 
 export type Capability = keyof typeof CAN

@@ -24,6 +24,9 @@ export const InviteBody = z.object({
   role: RoleSchema,
 })
 
+/** GET /api/auth/invitation?token=… (an invitation's token, not an API token). */
+export const InvitationQuery = z.object({ token: z.string().min(20).max(200) })
+
 export const AcceptInvitationBody = z.object({
   token: z.string().min(20).max(200),
   password: Password,

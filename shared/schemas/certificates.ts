@@ -37,3 +37,8 @@ export const CertificateListQuery = ListQuery.extend({
 export const CertificateZipQuery = z
   .object({ from: isoDay, to: isoDay, status: z.preprocess(emptyAsUndefined, z.enum(CERTIFICATE_STATUSES).optional()) })
   .refine((q) => !q.from || !q.to || q.from <= q.to, { message: 'The period ends before it starts', path: ['to'] })
+
+// GET /api/public/verify/:number. Malformed input is not an error there: it simply names no
+// certificate we issued.
+export const VerifyParams = z.object({ number: z.string().max(40).catch('') })
+export const VerifyQuery = z.object({ digest: z.string().max(128).optional().catch(undefined) })

@@ -243,3 +243,6 @@ export const LocationBody = z.strictObject({
 export const ImportQuery = z.object({
   dryRun: z.enum(['true', 'false', '1', '0']).optional().transform((v) => v === 'true' || v === '1'),
 })
+
+/** DELETE /api/samples/:id?version=N: retiring names the version the person saw. */
+export const DeleteSampleQuery = z.object({ version: z.coerce.number({ error: 'Give the version you retire (version=N)' }).int().min(1) })

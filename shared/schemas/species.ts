@@ -52,3 +52,8 @@ export const CompareQuery = z
 
 /** The most species one comparison holds. */
 export const COMPARE_LIMIT = 120
+
+/** POST /api/species/:id/samples. */
+export const LinkSampleBody = z.object({ sampleId: z.uuid({ message: 'sampleId must be a sample id' }) })
+/** DELETE /api/species/:id/samples/:sampleId. */
+export const SpeciesSampleParams = z.object({ id: z.uuid(), sampleId: z.uuid() })

@@ -224,6 +224,27 @@ export interface NoticeRow {
   sent_at: Date
 }
 
+export interface ApiTokenRow {
+  id: string
+  user_id: string
+  name: string
+  scope: 'read' | 'read-write'
+  secret_hash: string
+  prefix: string
+  /** DATE, as 'YYYY-MM-DD' */
+  expires_on: string
+  created_at: Date
+  last_used_at: Date | null
+  last_used_address: string | null
+  revoked_at: Date | null
+  revoked_by: string | null
+}
+
+export interface ApiTokenAddressRow {
+  token_id: string
+  address: string
+  first_at: Date
+
 export interface BeamPlanRow {
   id: string
   title: string

@@ -67,6 +67,11 @@ const MATRIX: Array<{ route: string; method: string; body?: unknown; expect: Rec
   { method: 'POST', route: '/api/auth/password-reset', body: { email: 'x' }, expect: { manager: 400, scientist: 400, technician: 400, auditor: 400, anonymous: 400 } },
   { method: 'POST', route: '/api/auth/password-reset/complete', body: { token: 'x' }, expect: { manager: 400, scientist: 400, technician: 400, auditor: 400, anonymous: 400 } },
   { method: 'POST', route: `/api/users/${randomUUID()}/reset-password`, expect: { manager: 404, scientist: 403, technician: 403, auditor: 403, anonymous: 401 } },
+  { method: 'GET', route: '/api/tokens', expect: { manager: 200, scientist: 200, technician: 200, auditor: 200, anonymous: 401 } },
+  { method: 'POST', route: '/api/tokens', body: { name: '' }, expect: { manager: 400, scientist: 400, technician: 400, auditor: 400, anonymous: 401 } },
+  { method: 'DELETE', route: `/api/tokens/${randomUUID()}`, expect: { manager: 404, scientist: 404, technician: 404, auditor: 404, anonymous: 401 } },
+  { method: 'GET', route: '/api/openapi.json', expect: { manager: 200, scientist: 200, technician: 200, auditor: 200, anonymous: 200 } },
+  { method: 'GET', route: '/api/jobs', expect: { manager: 200, scientist: 403, technician: 403, auditor: 403, anonymous: 401 } },
   { method: 'POST', route: '/api/notices/run', expect: { manager: 200, scientist: 403, technician: 403, auditor: 403, anonymous: 401 } },
 ]
 

@@ -13,10 +13,10 @@ afterAll(async () => {
 
 // What each role should find in the main navigation (DESIGN.md §2), as far as pages exist.
 const NAV: Array<[string, string[], string[]]> = [
-  ['manager', ['Overview', 'Samples', 'Species', 'Certificates', 'Scan', 'Audit trail', 'People'], []],
-  ['scientist', ['Overview', 'Samples', 'Species', 'Certificates'], ['Scan', 'Audit trail', 'People']],
-  ['technician', ['Overview', 'Samples', 'Species', 'Certificates', 'Scan'], ['Audit trail', 'People']],
-  ['auditor', ['Overview', 'Samples', 'Species', 'Certificates', 'Audit trail'], ['Scan', 'People']],
+  ['manager', ['Overview', 'Samples', 'Species', 'Certificates', 'Scan', 'Audit trail', 'People', 'Jobs'], []],
+  ['scientist', ['Overview', 'Samples', 'Species', 'Certificates'], ['Scan', 'Audit trail', 'People', 'Jobs']],
+  ['technician', ['Overview', 'Samples', 'Species', 'Certificates', 'Scan'], ['Audit trail', 'People', 'Jobs']],
+  ['auditor', ['Overview', 'Samples', 'Species', 'Certificates', 'Audit trail'], ['Scan', 'People', 'Jobs']],
 ]
 
 describe('the shell, per role', () => {

@@ -1,6 +1,5 @@
-import { z } from 'zod'
+import { InvitationQuery as Query } from '#shared/schemas/auth'
 
-const Query = z.object({ token: z.string().min(20).max(200) })
 
 // Lets the accept-invitation page greet the invitee by name before they choose a password.
 export default defineEventHandler(async (event) => {

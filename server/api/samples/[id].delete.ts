@@ -1,9 +1,8 @@
-import { z } from 'zod'
+import { DeleteSampleQuery as Query } from '#shared/schemas/samples'
 import { CAN } from '#shared/auth/roles'
 import { IdParam } from '#shared/schemas/common'
 
-// Retiring is an edit like any other: it names the version the person saw.
-const Query = z.object({ version: z.coerce.number({ error: 'Give the version you retire (version=N)' }).int().min(1) })
+// Retiring is an edit like any other: it names the version the person saw (DeleteSampleQuery).
 
 // Retiring is the only way a sample leaves the stock. A sample is never deleted: once there are
 // certificates and custody history they point at it, and even now its audit trail does. Until

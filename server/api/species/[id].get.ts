@@ -1,10 +1,9 @@
-import { z } from 'zod'
+import { IdParam as Params } from '#shared/schemas/common'
 import { CAN } from '#shared/auth/roles'
 import { ENGINE_VERSION, type SpeciesRecord } from '#shared/physics'
 import { recordChanges } from '#shared/species/changes'
 import type { SampleRow, SpeciesResultRow } from '#shared/types/db'
 
-const Params = z.object({ id: z.uuid() })
 
 // One recorded species: its results, newest first, each naming the engine that produced it and
 // what changed from the one before; and the samples linked as able to source it.

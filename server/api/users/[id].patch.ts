@@ -1,8 +1,7 @@
-import { z } from 'zod'
+import { IdParam as Params } from '#shared/schemas/common'
 import { UpdateUserBody } from '#shared/schemas/auth'
 import { CAN } from '#shared/auth/roles'
 
-const Params = z.object({ id: z.uuid() })
 
 export default defineEventHandler(async (event) => {
   const me = requireRole(event, ...CAN.managePeople)

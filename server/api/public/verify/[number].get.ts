@@ -1,11 +1,9 @@
 import { timingSafeEqual } from 'node:crypto'
-import { z } from 'zod'
+import { VerifyParams as Params, VerifyQuery as Query } from '#shared/schemas/certificates'
 import { CERTIFICATE_NUMBER_PATTERN, DIGEST_PATTERN } from '#shared/certificates/canonical'
 import { certifiedSummary } from '#shared/certificates/summary'
 
 // Malformed input is not an error here: it simply names no certificate we issued.
-const Params = z.object({ number: z.string().max(40).catch('') })
-const Query = z.object({ digest: z.string().max(128).optional().catch(undefined) })
 
 const ANSWER = { issued: 'genuine', superseded: 'superseded', revoked: 'revoked' } as const
 const DUMMY = Buffer.alloc(32)

@@ -1,7 +1,6 @@
-import { z } from 'zod'
+import { IdParam as Params } from '#shared/schemas/common'
 import { CAN } from '#shared/auth/roles'
 
-const Params = z.object({ id: z.uuid() })
 
 // The recorded species this sample can source (the other side of the species page's links).
 export default defineEventHandler(async (event) => {

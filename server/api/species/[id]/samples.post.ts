@@ -1,8 +1,7 @@
-import { z } from 'zod'
+import { IdParam as Params } from '#shared/schemas/common'
+import { LinkSampleBody as Body } from '#shared/schemas/species'
 import { CAN } from '#shared/auth/roles'
 
-const Params = z.object({ id: z.uuid() })
-const Body = z.object({ sampleId: z.uuid({ message: 'sampleId must be a sample id' }) })
 
 // Links a sample that can source this species. Linking twice is harmless (no second row).
 export default defineEventHandler(async (event) => {

@@ -1,7 +1,6 @@
-import { z } from 'zod'
+import { IdParam as Params } from '#shared/schemas/common'
 import { CAN } from '#shared/auth/roles'
 
-const Params = z.object({ id: z.uuid() })
 
 // A lab manager sends someone a link to set a new password: for a person who forgot it, or to
 // bring back a deactivated account (setting the password then reactivates it).

@@ -1,7 +1,6 @@
-import { z } from 'zod'
+import { SpeciesSampleParams as Params } from '#shared/schemas/species'
 import { CAN } from '#shared/auth/roles'
 
-const Params = z.object({ id: z.uuid(), sampleId: z.uuid() })
 
 export default defineEventHandler(async (event) => {
   requireRole(event, ...CAN.recordSpecies)
