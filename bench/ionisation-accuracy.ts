@@ -14,6 +14,7 @@
  */
 import { pathToFileURL } from 'node:url'
 import { METHODS, describeSpecies, referenceIonisationEv } from '../shared/physics/index'
+import type { ScfSpeciesEstimates } from '../shared/physics/scf/types'
 
 export interface MethodProvider {
   /** the method name printed in the table */
@@ -37,6 +38,7 @@ export const GROUPS: readonly Group[] = [
   { label: 'singly charged (q = 1)', test: (_, q) => q === 1 },
   { label: 'q = 2–4', test: (_, q) => q >= 2 && q <= 4 },
   { label: 'highly charged (q ≥ 5)', test: (_, q) => q >= 5 },
+  { label: 'heavy highly charged (Z ≥ 36, q ≥ 5)', test: (z, q) => z >= 36 && q >= 5 },
   { label: 'one-electron ions', test: (z, q) => q === z - 1 },
   { label: 'negative ions (EA)', test: (_, q) => q === -1 },
 ]
@@ -118,21 +120,25 @@ export function runAccuracyBench(out: (line: string) => void = (l) => process.st
 
 /**
  * Solves every species with a reference value in worker threads (about a minute on two cores)
- * and adds the scf-delta and scf-eigenvalue rows.
+ * and adds the scf-delta, scf-eigenvalue, dirac-scf-delta and dirac-scf-eigenvalue rows.
  */
 async function addScfProviders(workers: number): Promise<void> {
   const { Piscina } = await import('piscina')
   const pool = new Piscina({ filename: new URL('../server/workers/scf.ts', import.meta.url).href, execArgv: ['--import', 'tsx'], minThreads: workers, maxThreads: workers })
   const delta = new Map<string, number | null>()
   const eigen = new Map<string, number | null>()
+  const diracDelta = new Map<string, number | null>()
+  const diracEigen = new Map<string, number | null>()
   const jobs: Promise<void>[] = []
   for (let z = 1; z <= 118; z++) {
     for (let charge = 0; charge < z; charge++) {
       if (referenceIonisationEv(z, charge) === null) continue
       jobs.push(
-        pool.run({ z, charge }).then((r: { deltaEv: number | null; eigenvalueEv: number | null }) => {
+        pool.run({ z, charge }).then((r: ScfSpeciesEstimates) => {
           delta.set(`${z}:${charge}`, r.deltaEv)
           eigen.set(`${z}:${charge}`, r.eigenvalueEv)
+          diracDelta.set(`${z}:${charge}`, r.dirac?.deltaEv ?? null)
+          diracEigen.set(`${z}:${charge}`, r.dirac?.eigenvalueEv ?? null)
         }),
       )
     }
@@ -143,6 +149,8 @@ async function addScfProviders(workers: number): Promise<void> {
   process.stdout.write(`(SCF: ${jobs.length} species solved in ${((performance.now() - started) / 1000).toFixed(0)} s with ${workers} workers)\n\n`)
   addMethodProvider({ method: 'scf-delta', estimate: (z, q) => delta.get(`${z}:${q}`) ?? null })
   addMethodProvider({ method: 'scf-eigenvalue', estimate: (z, q) => eigen.get(`${z}:${q}`) ?? null })
+  addMethodProvider({ method: 'dirac-scf-delta', estimate: (z, q) => diracDelta.get(`${z}:${q}`) ?? null })
+  addMethodProvider({ method: 'dirac-scf-eigenvalue', estimate: (z, q) => diracEigen.get(`${z}:${q}`) ?? null })
 }
 
 if (import.meta.url === pathToFileURL(process.argv[1] ?? '').href) {

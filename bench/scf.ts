@@ -17,7 +17,7 @@
  */
 import { groundConfiguration } from '../shared/physics/configuration'
 import { NIST_ASD_ROWS, NIST_ASD_SOURCE } from '../shared/physics/data/nist-asd'
-import { SCF_METHOD, solveConfiguration, solveSpeciesScf } from '../shared/physics/scf/index'
+import { SCF_METHOD, runDirac, solveConfiguration, solveSpeciesAll, solveSpeciesDirac, solveSpeciesScf } from '../shared/physics/scf/index'
 
 const TARGET_LIGHT_MS = 30
 const TARGET_HEAVY_MS = 150
@@ -61,6 +61,9 @@ const config: Record<Band, ReturnType<typeof timing>> = { light: timing(), heavy
 const species: Record<Band, ReturnType<typeof timing>> = { light: timing(), heavy: timing() }
 const loops: number[] = []
 const kryptonMs: number[] = []
+// the relativistic solver against the non-relativistic one, same atom, same moment: ratio per atom
+const relRatio: number[] = []
+const relSpeciesRatio: number[] = []
 for (let z = 1; z <= 92; z++) {
   const band: Band = z <= 36 ? 'light' : 'heavy'
   const loop = loopBaseline()
@@ -68,6 +71,10 @@ for (let z = 1; z <= 92; z++) {
   if (z % 10 === 0) kryptonMs.push(best(3, () => solveConfiguration(36, neutral(36))))
   const c = best(3, () => solveConfiguration(z, neutral(z)))
   const s = best(3, () => solveSpeciesScf(z, 0))
+  const d = best(3, () => runDirac(z, neutral(z)))
+  const ds = best(3, () => solveSpeciesDirac(z, 0))
+  relRatio.push(d / c)
+  relSpeciesRatio.push(ds / s)
   config[band].ms.push(c)
   config[band].loops.push(c / loop)
   species[band].ms.push(s)
@@ -94,6 +101,12 @@ const row = (label: string, xs: Record<Band, ReturnType<typeof timing>>) => {
 lines.push(row('  one configuration', config))
 lines.push(row('  species + next ion (scf-delta)', species))
 lines.push(`${'  targets'.padEnd(34)} ${`${TARGET_LIGHT_MS} ms`.padStart(9).padEnd(31)} ${`${TARGET_HEAVY_MS} ms`.padStart(9)}   (×: ratio to target)`)
+lines.push(
+  '',
+  `relativistic (Dirac–Kohn–Sham) / non-relativistic solve time, same atom, Z = 1–92 (target: median ≤ 2):`,
+  `  one configuration median ×${median(relRatio).toFixed(2)} (range ${Math.min(...relRatio).toFixed(2)}–${Math.max(...relRatio).toFixed(2)});` +
+    ` species + next ion median ×${median(relSpeciesRatio).toFixed(2)}` + (median(relSpeciesRatio) <= 2 ? '  met' : '  MISSED'),
+)
 console.log(lines.join('\n'))
 
 // --- accuracy ---------------------------------------------------------------------------------
@@ -103,6 +116,7 @@ interface Sample {
   percent: number
 }
 const samples: Sample[] = []
+const diracSamples: Sample[] = []
 const failed: string[] = []
 let sweepMs = 0
 let solved = 0
@@ -113,7 +127,7 @@ for (let z = 1; z <= maxZ; z++) {
     const reference = references[charge]
     if (reference == null) continue
     const t0 = performance.now()
-    const s = solveSpeciesScf(z, charge)
+    const s = solveSpeciesAll(z, charge)
     sweepMs += performance.now() - t0
     solved++
     if (s.deltaEv === null) {
@@ -121,6 +135,9 @@ for (let z = 1; z <= maxZ; z++) {
       continue
     }
     samples.push({ z, charge, percent: (100 * Math.abs(s.deltaEv - reference)) / reference })
+    const rel = s.dirac?.deltaEv
+    if (rel != null) diracSamples.push({ z, charge, percent: (100 * Math.abs(rel - reference)) / reference })
+    else failed.push(`Z=${z} q=${charge} (relativistic): ${s.dirac?.species.failure ?? s.dirac?.next?.failure}`)
   }
 }
 
@@ -145,9 +162,22 @@ console.log(
     table('all charge states, Z = 55–92', (s) => s.z >= 55 && s.z <= 92),
     table('all charge states, Z = 93 and up', (s) => s.z > 92),
     '',
+    'dirac-scf-delta, same sweep:',
+    ...(() => {
+      const keep = samples.splice(0, samples.length, ...diracSamples)
+      const rows = [
+        table('first IE, Z = 55–92', (s) => s.charge === 0 && s.z >= 55 && s.z <= 92, 5),
+        table('highly charged (q ≥ 5)', (s) => s.charge >= 5, 1.5),
+        table('all with a reference', () => true, 2),
+        table('Z ≥ 36, q ≥ 5 (max ≤ 3 %)', (s) => s.z >= 36 && s.charge >= 5),
+      ]
+      samples.splice(0, samples.length, ...keep)
+      return rows
+    })(),
+    '',
     `species solved: ${solved} of ${total} with a reference value; not converged: ${failed.length}`,
     ...failed.slice(0, 20).map((f) => `  ${f}`),
-    `sweep: ${(sweepMs / 1000).toFixed(1)} s on one core, ${f1(perSpeciesMs)} ms per species (species + next ion, with density table)`,
+    `sweep: ${(sweepMs / 1000).toFixed(1)} s on one core, ${f1(perSpeciesMs)} ms per species (both solvers, species + next ion, with density tables: what a precompute task does)`,
     `precompute estimate, ${total} species on ${WORKERS} workers: ${precomputeMin.toFixed(1)} min (target < ${PRECOMPUTE_TARGET_MIN} min)` +
       (quick ? ' — from the Z ≤ 54 sweep, so an underestimate' : ''),
   ].join('\n'),

@@ -13,7 +13,7 @@
 import knexFactory, { type Knex } from 'knex'
 import knexConfig from '../knex.config'
 import { readScfCache } from '../server/utils/scf-cache'
-import { solveSpeciesScf } from '../shared/physics/scf/index'
+import { solveSpeciesAll } from '../shared/physics/scf/index'
 import type { ScfSpeciesEstimates } from '../shared/physics/scf/types'
 import {
   ACCEPTED_NOTATIONS,
@@ -107,7 +107,7 @@ async function main(): Promise<void> {
       if (solveHere && parsed.charge < parsed.z && methods.some((m) => scfNames.includes(m))) {
         // A solver that gives up on one species should not cost the user the rest of its record.
         try {
-          scf = solveSpeciesScf(parsed.z, parsed.charge, { configurationOf: groundConfiguration })
+          scf = solveSpeciesAll(parsed.z, parsed.charge, { configurationOf: groundConfiguration })
           scfStatus = 'computed'
         } catch (error) {
           scfFailure = `SCF solver failed: ${(error as Error).message}`

@@ -24,9 +24,11 @@ async function vitest(env) {
   return worst
 }
 
+// the unit tests compare the relativistic solver with ld1.x (Debian quantum-espresso)
+ensureDebianTools({ '/usr/bin/ld1.x': 'quantum-espresso' })
 if (unitOnly) process.exit(await runVitest(args, {}))
 
-ensureDebianTools({ '/usr/bin/chromium': 'chromium', '/usr/bin/pdftoppm': 'poppler-utils', '/usr/bin/pdftotext': 'poppler-utils', '/usr/bin/pdfsig': 'poppler-utils', '/usr/bin/zbarimg': 'zbar-tools' })
+ensureDebianTools({ '/usr/bin/chromium': 'chromium', '/usr/bin/pdftoppm': 'poppler-utils', '/usr/bin/pdftotext': 'poppler-utils', '/usr/bin/pdfsig': 'poppler-utils', '/usr/bin/zbarimg': 'zbar-tools', '/usr/bin/ld1.x': 'quantum-espresso' })
 const { startServices } = await import('./lib/services.mjs')
 
 const tmp = mkdtempSync(path.join(os.tmpdir(), 'ionfolio-test-'))

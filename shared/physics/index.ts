@@ -29,7 +29,7 @@ export {
   referenceIonisationSeries,
   referenceGroundLevel,
 } from './reference'
-export type { DescribeOptions, Estimate, ScreeningEntry, SpeciesRecord, TermSummary } from './record'
+export type { BindingEnergy, DescribeOptions, DiracSummary, Estimate, ScreeningEntry, SpeciesRecord, TermSummary } from './record'
 export type { ScfSpeciesEstimates } from './scf/types'
 export { describeSpecies } from './record'
 export { formatRecord } from './record-text'

@@ -5,7 +5,14 @@ import { getElement, getIsotope } from './elements'
 import { slaterTotalEnergyRydberg, nStar, screeningConstant } from './slater'
 import type { Subshell } from './subshells'
 
-export type MethodName = 'slater-hydrogenic' | 'slater-total-energy' | 'dirac-hydrogen-like' | 'scf-delta' | 'scf-eigenvalue'
+export type MethodName =
+  | 'slater-hydrogenic'
+  | 'slater-total-energy'
+  | 'dirac-hydrogen-like'
+  | 'scf-delta'
+  | 'scf-eigenvalue'
+  | 'dirac-scf-delta'
+  | 'dirac-scf-eigenvalue'
 
 export interface MethodInfo {
   name: MethodName
@@ -45,6 +52,18 @@ export const METHODS: readonly MethodInfo[] = [
     name: 'scf-eigenvalue',
     description: 'Minus the highest occupied orbital eigenvalue of the same self-interaction-corrected central-field solution',
     citation: 'J. P. Perdew and A. Zunger, Phys. Rev. B 23, 5048 (1981); J. F. Janak, Phys. Rev. B 18, 7165 (1978)',
+    scf: true,
+  },
+  {
+    name: 'dirac-scf-delta',
+    description: 'Total-energy difference (ΔSCF) of relativistic Dirac–Kohn–Sham central-field solutions of the next ion and the species: large and small components of every nlj subshell, spin-polarised local density with the self-interaction correction, finite nucleus',
+    citation: 'D. A. Liberman, D. T. Cromer and J. T. Waber, Comput. Phys. Commun. 2, 107 (1971); J. P. Perdew and A. Zunger, Phys. Rev. B 23, 5048 (1981); nuclear radii W. R. Johnson and G. Soff, At. Data Nucl. Data Tables 33, 405 (1985)',
+    scf: true,
+  },
+  {
+    name: 'dirac-scf-eigenvalue',
+    description: 'Minus the highest occupied nlj eigenvalue of the same self-interaction-corrected Dirac–Kohn–Sham solution',
+    citation: 'D. A. Liberman, D. T. Cromer and J. T. Waber, Comput. Phys. Commun. 2, 107 (1971); J. P. Perdew and A. Zunger, Phys. Rev. B 23, 5048 (1981)',
     scf: true,
   },
 ]

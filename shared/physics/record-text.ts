@@ -52,6 +52,10 @@ export function formatRecord(r: SpeciesRecord): string {
     lines.push(...table(rows, '    '))
     for (const note of ie.notes) lines.push(`    note: ${note}`)
   }
+  if (r.bindingEnergies.length > 0) {
+    lines.push('  binding energies (relativistic SCF; outermost = ionisation energy)')
+    lines.push(...table(r.bindingEnergies.map((b) => [b.subshell, `${eV(b.eV)} eV`, b.method]), '    '))
+  }
   if (r.productionThreshold) {
     const p = r.productionThreshold
     lines.push(`  production threshold  ${eV(p.eV)} eV, the ionisation energy of ${p.from} (${p.source})`)

@@ -4,7 +4,8 @@
  * Nested objects are frozen and shared between records of the same species (record-parts.ts);
  * copy before changing one.
  */
-import type { ScfOrbital, ScfRadialDensity, ScfSpeciesEstimates } from './scf/types'
+import { bindingEnergies, type BindingEnergy } from './binding'
+import type { DiracOrbital, DiracRadialDensity, ScfOrbital, ScfRadialDensity, ScfSpeciesEstimates } from './scf/types'
 import type { ConfigurationRule } from './configuration'
 import { METHOD_NAMES, type MethodName, diracHydrogenLikeEv, nuclearMass } from './methods'
 import { formatSpecies, parseSpecies, type ParsedSpecies } from './notation'
@@ -16,6 +17,7 @@ import type { SubshellBoxes } from './terms'
 import { ENGINE_VERSION } from './version'
 
 export type { Estimate, TermSummary } from './record-parts'
+export type { BindingEnergy } from './binding'
 
 export interface DescribeOptions {
   /** methods to run (default: every applicable one); unknown names throw */
@@ -32,6 +34,17 @@ export interface ScfSummary {
   totalEnergyHartree: number | null
   orbitals: readonly ScfOrbital[]
   density: ScfRadialDensity | null
+}
+
+/** What the record carries of the relativistic solution: nlj orbitals and large/small densities. */
+export interface DiracSummary {
+  method: string
+  converged: boolean
+  iterations: number
+  totalEnergyHartree: number | null
+  nucleusRadiusFm: number
+  orbitals: readonly DiracOrbital[]
+  density: DiracRadialDensity | null
 }
 
 export type ScreeningEntry = Readonly<ScreeningRow> & { readonly zEffMeanRadius?: number }
@@ -74,6 +87,10 @@ export interface SpeciesRecord {
   productionThresholdNote?: string
   /** the SCF solution of this species, when the caller supplied one */
   scf?: ScfSummary
+  /** binding energy of every occupied nlj subshell (binding.ts); empty without a relativistic solution */
+  bindingEnergies: readonly BindingEnergy[]
+  /** the relativistic SCF solution of this species, when the caller supplied one */
+  dirac?: DiracSummary
   caution: string
 }
 
@@ -118,6 +135,14 @@ export function describeSpecies(input: string | ParsedSpecies, options: Describe
     if (methods.has('scf-eigenvalue') && scf.eigenvalueEv !== null) {
       estimates.push(estimate('scf-eigenvalue', scf.eigenvalueEv, referenceEv, scf.species.method))
     }
+    const dirac = scf.dirac
+    if (dirac) {
+      for (const note of [failure('this species (relativistic)', dirac.species), failure('the next ion (relativistic)', dirac.next)]) if (note) notes.push(note)
+      if (methods.has('dirac-scf-delta') && dirac.deltaEv !== null) estimates.push(estimate('dirac-scf-delta', dirac.deltaEv, referenceEv, dirac.species.method))
+      if (methods.has('dirac-scf-eigenvalue') && dirac.eigenvalueEv !== null) {
+        estimates.push(estimate('dirac-scf-eigenvalue', dirac.eigenvalueEv, referenceEv, dirac.species.method))
+      }
+    }
     if (scf.species.converged) {
       screening = base.screening.map((row) => {
         const orbital = scf.species.orbitals.find((o) => subshellLabel(o.n, o.l) === row.subshell)
@@ -150,6 +175,7 @@ export function describeSpecies(input: string | ParsedSpecies, options: Describe
     unpaired: base.unpaired,
     orbitals: base.orbitals,
     terms: base.terms,
+    bindingEnergies: bindingEnergies(scf?.dirac, referenceEv),
     caution: base.caution,
   }
   if (base.referenceGroundLevel) record.referenceGroundLevel = base.referenceGroundLevel
@@ -164,6 +190,18 @@ export function describeSpecies(input: string | ParsedSpecies, options: Describe
       totalEnergyHartree: Number.isFinite(own.totalEnergyHartree) ? own.totalEnergyHartree : null,
       orbitals: own.orbitals,
       density: own.density ?? null,
+    }
+    const rel = scf.dirac?.species
+    if (rel) {
+      record.dirac = {
+        method: rel.method,
+        converged: rel.converged,
+        iterations: rel.iterations,
+        totalEnergyHartree: Number.isFinite(rel.totalEnergyHartree) ? rel.totalEnergyHartree : null,
+        nucleusRadiusFm: rel.nucleusRadiusFm,
+        orbitals: rel.orbitals,
+        density: rel.density ?? null,
+      }
     }
   }
   return record

@@ -8,6 +8,7 @@ import type { ScfFunctional } from './options'
 import { hartree, hartreeWorkspace } from './potential'
 import { selfInteraction, sicWorkspace } from './sic'
 import { lsdOnGrid } from './xc'
+import { addRelativisticExchange } from './xc-relativistic'
 
 /** One solved channel: its eigenvalue and radial function P (∫P² dr = 1). */
 export interface ChannelSolution {
@@ -23,8 +24,19 @@ export interface Field {
   build(x: Float64Array): { hartree: number; xc: number; sic: number }
 }
 
-/** A field builder for these channels on this grid, with its scratch arrays. */
-export function createField(z: number, grid: RadialGrid, channels: Channel[], functional: ScfFunctional): Field {
+/**
+ * A field builder for these channels on this grid, with its scratch arrays; nuclear is the
+ * potential of the nucleus (default the point charge −Z/r; the relativistic solver passes a
+ * finite one), relativisticExchange adds the correction of xc-relativistic.ts.
+ */
+export function createField(
+  z: number,
+  grid: RadialGrid,
+  channels: Channel[],
+  functional: ScfFunctional,
+  nuclear?: Float64Array,
+  relativisticExchange = false,
+): Field {
   const size = grid.size
   const count = channels.length
   const hws = hartreeWorkspace(grid)
@@ -55,15 +67,17 @@ export function createField(z: number, grid: RadialGrid, channels: Channel[], fu
     }
     for (let i = 0; i < size; i++) total[i] = pUp[i] + pDown[i]
     const eH = hartree(grid, total, vH, hws)
-    const eXc = lsdOnGrid(grid.r, grid.dr, pUp, pDown, vxcUp, vxcDown)
+    let eXc = lsdOnGrid(grid.r, grid.dr, pUp, pDown, vxcUp, vxcDown)
+    if (relativisticExchange) eXc += addRelativisticExchange(grid.r, grid.dr, pUp, pDown, vxcUp, vxcDown)
     let eSic = 0
     for (let c = 0; c < count; c++) {
       const ch = channels[c]
       const v = potentials[c]
       const vxc = ch.spin === 'down' ? vxcDown : vxcUp
-      for (let i = 0; i < size; i++) v[i] = -z / grid.r[i] + vH[i] + vxc[i]
+      if (nuclear) for (let i = 0; i < size; i++) v[i] = nuclear[i] + vH[i] + vxc[i]
+      else for (let i = 0; i < size; i++) v[i] = -z / grid.r[i] + vH[i] + vxc[i]
       if (functional === 'lsd-sic') {
-        eSic += selfInteraction(grid, x.subarray(c * size, (c + 1) * size), ch.perSpin, ch.spins, vSic, sws, hws)
+        eSic += selfInteraction(grid, x.subarray(c * size, (c + 1) * size), ch.perSpin, ch.spins, vSic, sws, hws, relativisticExchange)
         for (let i = 0; i < size; i++) v[i] -= vSic[i]
       }
     }

@@ -12,14 +12,20 @@
  * JSON (a failed solve has totalEnergyHartree NaN, which JSON writes as null, and a failure reason).
  */
 import { groundConfiguration } from '../configuration'
+import { getElement } from '../elements'
+import type { DiracOptions } from './dirac-scf'
+import { diracSpeciesEstimates } from './dirac-species'
 import type { SubshellOccupation } from './channels'
 import { METHOD_NAMES, type ScfOptions } from './options'
 import { toResult } from './result'
 import { runScf } from './scf'
 import { speciesEstimates, type ScfSpeciesOptions } from './species'
-import type { ScfResult, ScfSpeciesEstimates } from './types'
+import type { DiracSpeciesEstimates, ScfResult, ScfSpeciesEstimates } from './types'
 
 export type { ScfOrbital, ScfRadialDensity, ScfResult, ScfSpeciesEstimates } from './types'
+export type { DiracOrbital, DiracRadialDensity, DiracResult, DiracSpeciesEstimates } from './types'
+export type { DiracOptions } from './dirac-scf'
+export { DIRAC_METHOD_NAMES, runDirac } from './dirac-scf'
 export type { ScfFunctional, ScfOptions } from './options'
 export type { ConfigurationSource, ScfSpeciesOptions } from './species'
 export { HARTREE_EV } from './species'
@@ -38,4 +44,18 @@ export function solveConfiguration(z: number, subshells: SubshellOccupation[], o
  */
 export function solveSpeciesScf(z: number, charge: number, options: ScfSpeciesOptions = {}): ScfSpeciesEstimates {
   return speciesEstimates(z, charge, options.configurationOf ?? groundConfiguration, options)
+}
+
+/**
+ * The relativistic (Dirac–Kohn–Sham) ΔSCF and eigenvalue estimates of (z, charge), finite nucleus of
+ * the most abundant isotope unless options.massNumber says otherwise.
+ */
+export function solveSpeciesDirac(z: number, charge: number, options: DiracOptions & ScfSpeciesOptions = {}): DiracSpeciesEstimates {
+  const massNumber = options.massNumber ?? getElement(z)?.principalMassNumber
+  return diracSpeciesEstimates(z, charge, options.configurationOf ?? groundConfiguration, { ...options, massNumber })
+}
+
+/** Both solvers for one species, as the cache stores them: the non-relativistic estimates with `dirac` beside. */
+export function solveSpeciesAll(z: number, charge: number, options: ScfSpeciesOptions = {}): ScfSpeciesEstimates {
+  return { ...solveSpeciesScf(z, charge, options), dirac: solveSpeciesDirac(z, charge, options) }
 }

@@ -9,6 +9,7 @@ import type { RadialGrid } from './grid'
 import { orbitalPieces } from './channels'
 import { hartree, type HartreeWorkspace } from './potential'
 import { polarisedOnGrid } from './xc'
+import { addRelativisticPolarised } from './xc-relativistic'
 
 export interface SicWorkspace {
   p: Float64Array
@@ -25,7 +26,8 @@ export function sicWorkspace(grid: RadialGrid): SicWorkspace {
  * For one channel with radial charge pChannel (= perSpin·spins·P², any normalisation) and perSpin
  * electrons per spin: writes the occupation-weighted correction potential into vOut (to be
  * subtracted from v_KS) and returns the correction energy of all its orbitals (both spins when
- * spins = 2).
+ * spins = 2). relativisticExchange applies the correction of xc-relativistic.ts to the orbital's
+ * own exchange too, as the relativistic solver's field does to the total.
  */
 export function selfInteraction(
   grid: RadialGrid,
@@ -35,6 +37,7 @@ export function selfInteraction(
   vOut: Float64Array,
   ws: SicWorkspace,
   hws: HartreeWorkspace,
+  relativisticExchange = false,
 ): number {
   const size = grid.size
   const { p, vh, vxc } = ws
@@ -55,7 +58,8 @@ export function selfInteraction(
   let energy = 0
   for (const { fraction, count } of orbitalPieces(perSpin)) {
     if (fraction !== 1) for (let i = 0; i < end; i++) p[i] *= fraction
-    const exc = polarisedOnGrid(grid.r, grid.dr, p, end, vxc)
+    let exc = polarisedOnGrid(grid.r, grid.dr, p, end, vxc)
+    if (relativisticExchange) exc += addRelativisticPolarised(grid.r, grid.dr, p, end, vxc)
     if (fraction !== 1) for (let i = 0; i < end; i++) p[i] /= fraction
     const weight = (count * fraction) / perSpin
     for (let i = 0; i < size; i++) vOut[i] += weight * (fraction * vh[i] + (i < end ? vxc[i] : 0))

@@ -51,4 +51,58 @@ export interface ScfSpeciesEstimates {
   deltaEv: number | null
   /** −ε of the outermost occupied orbital in eV; null when the solve did not converge */
   eigenvalueEv: number | null
+  /** the relativistic solution of the same species (solveSpeciesAll); absent in older cache rows */
+  dirac?: DiracSpeciesEstimates
+}
+
+/** One occupied nlj subshell of a converged relativistic (Dirac–Kohn–Sham) solution. */
+export interface DiracOrbital {
+  n: number
+  l: number
+  /** 2j */
+  twoJ: number
+  kappa: number
+  /** "2p3/2" */
+  label: string
+  occupation: number
+  /** orbital eigenvalue without the rest energy, hartree (occupation-weighted over spins) */
+  energyHartree: number
+  /** ⟨r⟩ and ⟨r²⟩ over large and small components, bohr and bohr² */
+  rMean: number
+  r2Mean: number
+  /** ⟨r⟩ of the large and of the small component alone, each normalised to itself, bohr */
+  rMeanLarge: number
+  rMeanSmall: number
+  /** ∫F² dr: the small component's share of the norm */
+  smallFraction: number
+}
+
+/** r²|g|² and r²|f|² per nlj subshell (one electron, large + small = 1) on a coarse log table. */
+export interface DiracRadialDensity {
+  r: number[]
+  large: Record<string, number[]>
+  small: Record<string, number[]>
+}
+
+/** The relativistic solution of one configuration. */
+export interface DiracResult {
+  method: string
+  z: number
+  charge: number
+  converged: boolean
+  iterations: number
+  totalEnergyHartree: number
+  /** radius of the uniformly charged nuclear sphere, fm (0: point nucleus) */
+  nucleusRadiusFm: number
+  orbitals: DiracOrbital[]
+  density?: DiracRadialDensity
+  failure?: string
+}
+
+/** The relativistic estimates of one species, carried beside the non-relativistic ones. */
+export interface DiracSpeciesEstimates {
+  species: DiracResult
+  next: DiracResult | null
+  deltaEv: number | null
+  eigenvalueEv: number | null
 }

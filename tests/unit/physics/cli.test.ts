@@ -38,7 +38,7 @@ describe('npm run species (scripts/species.ts as a child process)', () => {
     const { status, stdout, stderr } = run('--json', '--methods', 'slater-hydrogenic,guesswork', 'Fe')
     expect(status).toBe(2)
     expect(stdout).toBe('')
-    expect(stderr).toMatch(/unknown method 'guesswork'; known: slater-hydrogenic, slater-total-energy, dirac-hydrogen-like, scf-delta, scf-eigenvalue/)
+    expect(stderr).toMatch(/unknown method 'guesswork'; known: slater-hydrogenic, slater-total-energy, dirac-hydrogen-like, scf-delta, scf-eigenvalue, dirac-scf-delta, dirac-scf-eigenvalue/)
   }, 60_000)
 
   it('prints readable text by default', () => {
@@ -63,5 +63,23 @@ describe.skipIf(!existsSync(new URL('../../../shared/physics/scf/index.ts', impo
     const delta = record.ionisationEnergy.estimates[0].eV
     expect(Math.abs(delta - (PYMATGEN[0].firstIonisationEv as number)) / 13.6).toBeLessThan(0.05)
     expect(record.screening[0].zEffMeanRadius).toBeGreaterThan(0)
+  }, 60_000)
+
+  it('prints the relativistic estimates and the binding energy of every nlj subshell in --json', () => {
+    // NIST ASD ionisation energy of Ar7+ (Na-like, 3s): 143.4567 eV (pymatgen's periodic_table.json)
+    const { status, stdout } = run('--json', '--methods', 'dirac-scf-delta,dirac-scf-eigenvalue', 'Ar 7+')
+    expect(status).toBe(0)
+    const record = JSON.parse(stdout)
+    expect(record.ionisationEnergy.estimates.map((e: { method: string }) => e.method)).toEqual(['dirac-scf-delta', 'dirac-scf-eigenvalue'])
+    expect(Math.abs(record.ionisationEnergy.estimates[0].deviationPercent)).toBeLessThan(2)
+    const labels = record.bindingEnergies.map((b: { subshell: string }) => b.subshell)
+    expect(labels).toEqual(['1s1/2', '2s1/2', '2p1/2', '2p3/2', '3s1/2'])
+    for (const b of record.bindingEnergies) expect(Object.keys(b).sort()).toEqual(['eV', 'method', 'subshell'])
+    // the outermost subshell is tied to the NIST value, the inner ones are eigenvalues, deepest first
+    expect(record.bindingEnergies[4]).toEqual({ subshell: '3s1/2', eV: record.ionisationEnergy.reference.eV, method: 'nist-asd' })
+    expect(record.bindingEnergies[0].method).toBe('dirac-scf-eigenvalue')
+    expect(record.bindingEnergies[0].eV).toBeGreaterThan(record.bindingEnergies[1].eV)
+    expect(record.dirac.orbitals).toHaveLength(5)
+    expect(record.dirac.density.large['1s1/2'].length).toBe(record.dirac.density.r.length)
   }, 60_000)
 })

@@ -28,6 +28,8 @@ describe('constants', () => {
       'dirac-hydrogen-like',
       'scf-delta',
       'scf-eigenvalue',
+      'dirac-scf-delta',
+      'dirac-scf-eigenvalue',
     ])
     for (const m of METHODS) {
       expect(m.description.length).toBeGreaterThan(20)
