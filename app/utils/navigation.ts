@@ -12,6 +12,7 @@ export const NAVIGATION: NavItem[] = [
   { to: '/samples', label: 'Samples', capability: 'readSamples' },
   { to: '/species', label: 'Species', capability: 'lookUpSpecies' },
   { to: '/species/registry', label: 'Recorded species', capability: 'lookUpSpecies' },
+  { to: '/beam', label: 'Beam planning', capability: 'readBeamPlans' },
   { to: '/certificates', label: 'Certificates', capability: 'readCertificates' },
   { to: '/scan', label: 'Scan', capability: 'custody' },
   { to: '/checkouts', label: 'Check-outs', capability: 'custody' },

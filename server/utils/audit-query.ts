@@ -80,6 +80,7 @@ export function subjectOf(r: Joined): AuditSubject | null {
     case 'user': return s(r.tu_name ?? r.after?.name ?? r.after?.email, r.tu_email ?? r.after?.email ?? null, r.tu_email ? `/people?q=${encodeURIComponent(String(r.tu_email))}` : null)
     case 'invitation': return s(r.inv_name ?? r.after?.name, r.inv_email ?? r.after?.email, '/people')
     case 'location': return s(r.l_code ?? r.after?.code, r.l_name ?? r.after?.name, '/samples/places')
+    case 'beam_plan': return s(r.after?.ion, r.after?.title, id ? `/beam/plans/${id}` : null)
     default: return id ? s(null, null, null) : null
   }
 }

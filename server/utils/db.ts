@@ -1,6 +1,6 @@
 import knexFactory, { type Knex } from 'knex'
 import pg from 'pg'
-import type { ApiTokenAddressRow, ApiTokenRow, AuditRow, CertificateRow, CustodyEventRow, DatasheetRow, NoticeRow, SampleCheckoutRow, InvitationRow, LocationRow, LicenceLimitRow, SampleComponentIsotopeRow, SampleComponentRow, SampleRow, SampleSpeciesRow, ScfCacheRow, SessionRow, SignInFailureRow, SpeciesResultRow, SpeciesRow, UserRow } from '#shared/types/db'
+import type { ApiTokenAddressRow, ApiTokenRow, AuditRow, BeamPlanRow, CertificateRow, CustodyEventRow, DatasheetRow, NoticeRow, SampleCheckoutRow, InvitationRow, LocationRow, LicenceLimitRow, SampleComponentIsotopeRow, SampleComponentRow, SampleRow, SampleSpeciesRow, ScfCacheRow, SessionRow, SignInFailureRow, SpeciesResultRow, SpeciesRow, UserRow } from '#shared/types/db'
 
 // Typed tables: `db('users')` knows its columns. Declared here, beside useDb, so every
 // project that compiles a route (the server's and the pages' type inference) sees it.
@@ -25,6 +25,7 @@ declare module 'knex/types/tables' {
     custody_events: CustodyEventRow
     sample_checkouts: SampleCheckoutRow
     notices: NoticeRow
+    beam_plans: BeamPlanRow
     api_tokens: ApiTokenRow
     api_token_addresses: ApiTokenAddressRow
   }

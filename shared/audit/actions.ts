@@ -26,6 +26,7 @@ export const ACTION_VERBS: Record<string, string> = {
   'species.recorded': 'recorded',
   'species.sample-linked': 'linked a sample to',
   'species.sample-unlinked': 'unlinked a sample from',
+  'beam_plan.saved': 'saved',
   'location.created': 'created the storage place',
   'user.invited': 'invited',
   'user.invitation-resent': 'sent a new invitation to',
@@ -57,6 +58,7 @@ export const ACTION_KINDS = {
   custody: { label: 'Custody', prefixes: ['sample.custody.'] },
   certificates: { label: 'Certificates', prefixes: ['certificate.'] },
   species: { label: 'Species', prefixes: ['species.'] },
+  beam: { label: 'Beam plans', prefixes: ['beam_plan.'] },
   people: { label: 'People', prefixes: ['user.'] },
   'sign-ins': { label: 'Sign-ins and passwords', prefixes: ['auth.'] },
   other: { label: 'Places, notices, exports', prefixes: ['location.', 'notices.', 'audit.'] },
@@ -79,7 +81,7 @@ export interface AuditSubject {
   href: string | null
 }
 
-const NOUNS: Record<string, string> = { sample: 'sample', certificate: 'certificate', species: 'species', user: '', invitation: '', location: 'place', sample_import: '', audit_log: '', notices: '' }
+const NOUNS: Record<string, string> = { sample: 'sample', certificate: 'certificate', species: 'species', user: '', invitation: '', location: 'place', beam_plan: 'beam plan', sample_import: '', audit_log: '', notices: '' }
 
 /** The record in words: "sample S-2026-000037 Nickel foil", "certificate C-2026-000004". */
 export function subjectText(s: AuditSubject | null): string {

@@ -24,6 +24,8 @@ export const CAN = {
   printLabels: ['manager', 'technician'],
   issueCertificates: ['manager'],
   readCertificates: everyone,
+  planBeams: ['manager', 'scientist'],
+  readBeamPlans: everyone,
   runNotices: ['manager'],
   readAudit: ['manager', 'auditor'],
   managePeople: ['manager'],

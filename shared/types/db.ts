@@ -278,4 +278,24 @@ export interface ApiTokenAddressRow {
   token_id: string
   address: string
   first_at: Date
+
+export interface BeamPlanRow {
+  id: string
+  title: string
+  z: number
+  mass_number: number
+  ion_label: string
+  energy_mev_u: number
+  medium: string
+  charge_state: number | null
+  charge_fraction: number | null
+  rigidity_tm: number | null
+  stripper_sample_id: string | null
+  source_sample_id: string | null
+  engine_version: string
+  inputs: unknown
+  result: unknown
+  note: string | null
+  created_by: string | null
+  created_at: Date
 }
