@@ -157,7 +157,9 @@ function splitIsotope(text: string): { letters: string; massText: string } | nul
  */
 export function parseIsotopeToken(text: string): { z: number; massNumber: number } | null {
   if (typeof text !== 'string' || text.length > 16) return null
-  const parts = splitIsotope(text.replace(/\s+/g, ' ').trim())
+  // superscript mass numbers as pasted from a formula ('⁵⁸Ni')
+  const plain = text.replace(/[⁰¹²³⁴⁵⁶⁷⁸⁹]/g, (c) => String('⁰¹²³⁴⁵⁶⁷⁸⁹'.indexOf(c)))
+  const parts = splitIsotope(plain.replace(/\s+/g, ' ').trim())
   if (!parts || /^0/.test(parts.massText)) return null
   const element = getElement(parts.letters)
   if (!element) return null
@@ -217,20 +219,4 @@ export function parseSpecies(input: string): ParsedSpecies {
   const charge = readCharge(rest, z, symbol)
   const massNumber = massText === undefined ? null : readMassNumber(massText, z, symbol)
   return { input, z, symbol, charge, massNumber }
-}
-
-/**
- * An isotope named as one search token: "Ni-58", "58Ni", "Ni58", "58-Ni", "⁵⁸Ni" (any letter case
- * of the symbol that names one element). Null unless the symbol is an element and the mass number
- * one of its nuclides in the nuclide table, so a plain word or a lot number is left alone.
- */
-export function parseIsotopeToken(text: string): { z: number; massNumber: number } | null {
-  const t = text.trim().replace(/[⁰¹²³⁴⁵⁶⁷⁸⁹]/g, (c) => String('⁰¹²³⁴⁵⁶⁷⁸⁹'.indexOf(c)))
-  const m = /^([A-Za-z]{1,2})-?(\d{1,3})$/.exec(t) ?? /^(\d{1,3})-?([A-Za-z]{1,2})$/.exec(t)
-  if (!m) return null
-  const [symbol, mass] = /^\d/.test(m[1]!) ? [m[2]!, m[1]!] : [m[1]!, m[2]!]
-  const element = getElement(symbol)
-  if (!element || element.symbol.toLowerCase() !== symbol.toLowerCase()) return null
-  const massNumber = Number(mass)
-  return getIsotope(element.z, massNumber) ? { z: element.z, massNumber } : null
 }
