@@ -278,6 +278,7 @@ export interface ApiTokenAddressRow {
   token_id: string
   address: string
   first_at: Date
+}
 
 export interface BeamPlanRow {
   id: string

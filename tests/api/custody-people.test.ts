@@ -76,7 +76,8 @@ describe('check-out to a person', () => {
   it('lists overdue check-outs for technicians and managers, and only those', async () => {
     const late = await createSample(c.manager)
     const onTime = await createSample(c.manager)
-    const me = person('technician')
+    // the signed-in technician (other tests may have added technicians to the people list)
+    const me = (await tech.get('/api/auth/me')).body as { id: string }
     await act(tech, late.id, { action: 'check-out', version: 1, holder: { userId: me.id }, run: 'Run 26-190', dueBack: dayFromNow(1) })
     await act(tech, onTime.id, { action: 'check-out', version: 1, holder: { userId: me.id }, run: 'Run 26-191', dueBack: dayFromNow(1) })
     await testDb()('sample_checkouts').where({ sample_id: late.id }).update({ due_back: testDb().raw('current_date - 3') })

@@ -15,14 +15,19 @@ export default defineEventHandler(async (event) => {
     .select('s.id', 's.code', 's.name', 's.formula', 's.status', 's.areal_density_ug_cm2', 'l.code as location_code', 'l.name as location_name') as FoilRow[]
   let sources: Source[] = []
   if (q.z) {
-    // Enrichment in the asked isotope: a component naming it gives its enrichment (or 100 % of an
-    // isotope-only component); natural material gives the natural abundance, computed by the page.
+    // Enrichment in the asked isotope: a component naming it gives its enrichment or analysed atom %
+    // (or 100 % of an isotope-only component); natural material gives the natural abundance, computed by the page.
     const rows = await db('sample_components as c')
       .join('samples as s', 's.id', 'c.sample_id')
       .leftJoin('locations as l', 'l.id', 's.location_id')
+      // a component described by a full isotopic analysis has no enrichment: read the named
+      // isotope's analysed atom % instead
+      .leftJoin('sample_component_isotopes as a', function () {
+        this.on('a.component_id', 'c.id').andOn('a.mass_number', 'c.mass_number')
+      })
       .where('c.z', q.z)
       .whereNotIn('s.status', ['retired', 'depleted'])
-      .select('s.id', 's.code', 's.name', 's.form', 's.status', 's.hazard_kinds', 'c.mass_number', 'c.enrichment_pct', 'c.fraction', 'l.code as location_code') as SourceRow[]
+      .select('s.id', 's.code', 's.name', 's.form', 's.status', 's.hazard_kinds', 'c.mass_number', 'c.enrichment_pct', 'a.atom_pct as analysed_pct', 'c.fraction', 'l.code as location_code') as SourceRow[]
     sources = rows
       .map((r) => ({
         id: r.id,
@@ -33,7 +38,7 @@ export default defineEventHandler(async (event) => {
         place: r.location_code ?? null,
         hazardKinds: r.hazard_kinds,
         massNumber: r.mass_number ?? null,
-        enrichmentPct: r.mass_number === null ? null : (r.enrichment_pct ?? null),
+        enrichmentPct: r.mass_number === null ? null : (r.enrichment_pct ?? r.analysed_pct ?? null),
         matches: q.massNumber === undefined || r.mass_number === null || r.mass_number === q.massNumber,
       }))
       .sort((a, b) => Number(b.matches) - Number(a.matches) || enrichmentRank(b, q.massNumber) - enrichmentRank(a, q.massNumber) || a.code.localeCompare(b.code))
@@ -45,7 +50,7 @@ export default defineEventHandler(async (event) => {
 })
 
 interface FoilRow { id: string; code: string; name: string; formula: string | null; status: string; areal_density_ug_cm2: number | null; location_code: string | null; location_name: string | null }
-interface SourceRow { id: string; code: string; name: string; form: string; status: string; hazard_kinds: string[]; mass_number: number | null; enrichment_pct: number | null; fraction: number; location_code: string | null }
+interface SourceRow { id: string; code: string; name: string; form: string; status: string; hazard_kinds: string[]; mass_number: number | null; enrichment_pct: number | null; analysed_pct: number | null; fraction: number; location_code: string | null }
 interface Source { id: string; code: string; name: string; form: string; status: string; place: string | null; hazardKinds: string[]; massNumber: number | null; enrichmentPct: number | null; matches: boolean }
 
 // Enriched in the asked isotope first (by its enrichment), then natural material.
