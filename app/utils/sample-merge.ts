@@ -11,7 +11,14 @@ export const MERGE_FIELDS: Record<string, string> = {
 // The composition is one field for merging: its rows and their basis go together, or the
 // fractions of one version would be read on the basis of the other.
 function value(s: SampleFormState, field: string): string {
-  if (field === 'composition') return JSON.stringify([s.basis, s.components.filter((c) => c.z || c.fraction || c.massNumber).map(({ key: _k, ...c }) => c)])
+  if (field === 'composition') {
+    // the row keys (outer, and those of an isotopic analysis's lines) only tell Vue the rows
+    // apart: two copies of the same composition differ in them and nowhere else
+    const rows = s.components
+      .filter((c) => c.z || c.fraction || c.massNumber)
+      .map(({ key: _k, ...c }) => ({ ...c, analysis: (c.analysis ?? []).map(({ key: _l, ...l }) => l) }))
+    return JSON.stringify([s.basis, rows])
+  }
   return String((s as unknown as Record<string, unknown>)[field] ?? '')
 }
 

@@ -78,6 +78,7 @@ describe('scanning a label on a phone', () => {
     await page.getByTestId('action-consume').click()
     await page.getByTestId('act-amount').fill('3.1')
     await page.getByTestId('act-save').click()
+    await page.getByRole('alert').filter({ hasText: 'Only 2.5 mg left' }).first().waitFor()
     await expect(page.getByRole('alert').filter({ hasText: 'Only 2.5 mg left' }).count()).resolves.toBe(1)
 
     // "My check-outs": the check-out the technician made, with its holder and due day.
