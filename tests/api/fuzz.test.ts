@@ -4,6 +4,7 @@ import path from 'node:path'
 import { Client, signedIn, unique } from '../support/api'
 import { waitForMail } from '../support/mail'
 import { createSample } from '../support/samples'
+import { seededRandom } from '../../shared/samples/propagation'
 
 // Random bodies and query strings at every route of the server (its route files, as the route
 // table is built from them), from a seeded generator: a failure names the seed and the request,
@@ -11,16 +12,6 @@ import { createSample } from '../support/samples'
 const SEED = Number(process.env.FUZZ_SEED ?? 20261211)
 const REQUESTS = Number(process.env.FUZZ_REQUESTS ?? 2400)
 
-function mulberry32(seed: number) {
-  let a = seed >>> 0
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0
-    let t = a
-    t = Math.imul(t ^ (t >>> 15), t | 1)
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61)
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296
-  }
-}
 
 /** Every API route file as [method, pattern], e.g. ['PATCH', '/api/samples/[id]']. */
 function routeTable(): Array<[string, string]> {
@@ -64,7 +55,7 @@ describe(`fuzzing every route (seed ${SEED})`, () => {
   })
 
   it(`sends ${REQUESTS} random requests and gets no 500`, async () => {
-    const rand = mulberry32(SEED)
+    const rand = seededRandom(SEED)
     const pick = <T,>(xs: readonly T[]): T => xs[Math.floor(rand() * xs.length)]!
     const int = (n: number) => Math.floor(rand() * n)
     const scalar = (): unknown =>
