@@ -11,7 +11,10 @@ import type { DatasheetRow } from '#shared/types/db'
  * temporary file, stored, then recorded with its audit row; a store failure leaves no row, a
  * database failure removes the stored object.
  */
-export async function receiveDatasheet(event: H3Event, user: User, sample: { id: string; code: string }, replaces: DatasheetRow | null) {
+export async function receiveDatasheet(event: H3Event, user: User, sample: { id: string; code: string; status: string }, replaces: DatasheetRow | null) {
+  // Refused before a byte of the file is read: a retired sample's record is closed, for a first
+  // upload and for a new version alike.
+  if (sample.status === 'retired') throw createError({ statusCode: 409, statusMessage: 'Conflict', message: 'This sample is retired; bring it back into the stock before adding datasheets' })
   const file = await receiveUpload(event)
   try {
     const datasheetId = randomUUID()

@@ -81,6 +81,18 @@ describe('datasheet versions', () => {
     expect((await manager.post(`/api/datasheets/${sheet.id}/withdraw`, { reason: 'Datasheet was for another lot' })).status).toBe(200)
   })
 
+  it('refuses a new version for a retired sample, as it refuses a first upload, and stores nothing', async () => {
+    const s = await createSample(manager)
+    const sheet = (await manager.post(`/api/samples/${s.id}/datasheets`, form(pdf('kept'), 'Kept.pdf'))).body
+    const { version } = (await manager.get(`/api/samples/${s.id}`)).body
+    expect((await manager.delete(`/api/samples/${s.id}?version=${version}`)).status).toBe(200)
+    const r = await manager.post(`/api/datasheets/${sheet.id}/replace`, form(pdf('late'), 'Late.pdf'))
+    expect(r.status).toBe(409)
+    expect(r.body.message).toMatch(/retired/)
+    expect(await testDb()('datasheets').where({ sample_id: s.id }).count('* as n').first()).toMatchObject({ n: '1' })
+    expect((await objectsUnder(`datasheets/${s.id}/`)).length).toBe(1)
+  })
+
   it('checks the reason, the datasheet and the role', async () => {
     const s = await createSample(manager)
     const sheet = (await manager.post(`/api/samples/${s.id}/datasheets`, form(pdf('x'), 'X.pdf'))).body

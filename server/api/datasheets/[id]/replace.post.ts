@@ -11,7 +11,7 @@ export default defineEventHandler(async (event) => {
   if (!sheet) throw createError({ statusCode: 404, statusMessage: 'Not found', message: 'No such datasheet' })
   if (sheet.withdrawn_at) throw createError({ statusCode: 409, statusMessage: 'Conflict', message: 'This datasheet is withdrawn: upload a new one instead' })
   if (sheet.replaced_at) throw createError({ statusCode: 409, statusMessage: 'Conflict', message: 'This datasheet was already replaced: replace its newest version' })
-  const sample = (await db('samples').where({ id: sheet.sample_id }).first('id', 'code'))!
+  const sample = (await db('samples').where({ id: sheet.sample_id }).first('id', 'code', 'status'))!
   const record = await receiveDatasheet(event, user, sample, sheet)
   setResponseStatus(event, 201)
   return record

@@ -9,8 +9,6 @@ export default defineEventHandler(async (event) => {
   const { id } = paramsValid(event, IdParam)
   const sample = await useDb()('samples').where({ id }).first('id', 'code', 'status')
   if (!sample) throw createError({ statusCode: 404, statusMessage: 'Not found', message: 'No such sample' })
-  // Refused before a byte of the file is read: a retired sample's record is closed.
-  if (sample.status === 'retired') throw createError({ statusCode: 409, statusMessage: 'Conflict', message: 'This sample is retired; bring it back into the stock before adding datasheets' })
   const record = await receiveDatasheet(event, user, sample, null)
   setResponseStatus(event, 201)
   return record
