@@ -16,6 +16,13 @@ export const Password = z
   .min(PASSWORD_MIN_LENGTH, `Use at least ${PASSWORD_MIN_LENGTH} characters`)
   .max(1024, 'Use at most 1024 characters')
 
+/** What is wrong with a new password typed twice in a form (the rule and the repeat), or null. */
+export function newPasswordProblem(password: string, repeated: string): string | null {
+  const parsed = Password.safeParse(password)
+  if (!parsed.success) return parsed.error.issues[0]!.message
+  return password === repeated ? null : 'The two passwords differ'
+}
+
 export const RoleSchema = z.enum(ROLES, { message: `Role must be one of: ${ROLES.join(', ')}` })
 
 export const InviteBody = z.object({
@@ -49,8 +56,10 @@ export const ChangePasswordBody = z.object({
 
 export const ResetRequestBody = z.object({ email: Email })
 
+const RESET_LINK_INVALID = 'This link is not valid or was already used; ask for a new one'
+
 export const ResetCompleteBody = z.object({
-  token: z.string().min(20).max(200),
+  token: z.string({ error: RESET_LINK_INVALID }).min(20, RESET_LINK_INVALID).max(200, RESET_LINK_INVALID),
   password: Password,
 })
 
