@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest'
-import { HARTREE_EV, SCF_METHOD, solveConfiguration, solveSpeciesScf } from '../../../shared/physics/scf/index'
+import { HARTREE_EV, SCF_METHOD, runDirac, solveConfiguration, solveSpeciesScf } from '../../../shared/physics/scf/index'
+import { runScf } from '../../../shared/physics/scf/scf'
 import { groundConfiguration } from '../../../shared/physics/configuration'
 
 describe('a solve that cannot converge says so', () => {
@@ -113,6 +114,32 @@ describe('orbital energies and the eigenvalue estimate', () => {
       for (let i = 1; i < energies.length; i++) expect(energies[i]).toBeGreaterThan(energies[i - 1])
     }
     expect(r.orbitals.reduce((s, o) => s + o.occupation, 0)).toBe(54)
+  })
+})
+
+// The seed only supplies the starting densities: the ion started from the atom's orbitals (which
+// carry one electron more) reaches the solution it reaches from the Thomas–Fermi start, and a seed
+// on another grid is ignored. Both solvers share this loop (iteration.ts).
+describe.each([
+  ['non-relativistic', runScf],
+  ['relativistic', runDirac],
+] as const)('a %s run seeded with a neighbouring solution', (_name, run) => {
+  it.each([
+    [26, 0],
+    [36, 0],
+    [79, 1],
+  ])('Z = %i: the ion of charge %i + 1 converges to the same energy as from scratch, in no more iterations', (z, q) => {
+    const settings = { rMax: 40, densityPoints: 0 }
+    const atom = (run as typeof runScf)(z, groundConfiguration(z, q).subshells, settings)
+    const ion = groundConfiguration(z, q + 1).subshells
+    const fresh = (run as typeof runScf)(z, ion, settings)
+    const seeded = (run as typeof runScf)(z, ion, settings, atom)
+    expect(fresh.converged && seeded.converged).toBe(true)
+    // both converged to 1e-6 per electron in the density: energies agree far below a meV
+    expect(Math.abs(seeded.totalEnergy - fresh.totalEnergy)).toBeLessThan(1e-5)
+    expect(seeded.iterations).toBeLessThanOrEqual(fresh.iterations)
+    const otherGrid = (run as typeof runScf)(z, groundConfiguration(z, q).subshells, { ...settings, rMax: 30 })
+    expect((run as typeof runScf)(z, ion, settings, otherGrid)).toEqual(fresh)
   })
 })
 
