@@ -64,10 +64,6 @@ export const NUCLIDES: Record<string, Nuclide> = {
 /** Decay constant λ = ln 2 / T½, 1/s. */
 export const lambda = (halfLifeS: number) => Math.LN2 / halfLifeS
 
-/** The activity `seconds` after a reference activity `a0` (any unit), for half-life `halfLifeS`. */
-export function decayed(a0: number, halfLifeS: number, seconds: number): number {
-  return a0 * Math.exp(-lambda(halfLifeS) * seconds)
-}
 
 /**
  * Activities of every member of a linear chain `seconds` after the reference, when only the
@@ -88,6 +84,14 @@ export function batemanActivities(a0: number, halfLives: readonly number[], seco
     for (let i = 0; i < n; i++) product *= l[i]! * (branchings[i] ?? 1)
     return ln * n0 * product * sum
   })
+}
+
+/**
+ * The activity `seconds` after a reference activity `a0` (any unit), for half-life `halfLifeS`:
+ * the chain of one member, so the decay law is written once, in batemanActivities.
+ */
+export function decayed(a0: number, halfLifeS: number, seconds: number): number {
+  return batemanActivities(a0, [halfLifeS], seconds)[0]!
 }
 
 /** The chain carried for a nuclide: itself and the daughters the table names, in order. */

@@ -35,6 +35,16 @@ describe('decay of a single nuclide: A = A₀ e^(−λt)', () => {
     expect(a.activityBq / 370e3).toBeCloseTo(0.538, 3)
   })
 
+  // decayed is the one-member Bateman chain; it must still be the plain law A₀·2^(−t/T½), the
+  // definition of the half-life (common practice, no source).
+  it.each(['H-3', 'Co-60', 'Y-90', 'Pa-234m', 'U-238'])('%s: the one-member chain is A₀·2^(−t/T½) to 1e-14', (name) => {
+    const half = NUCLIDES[name]!.halfLifeS
+    for (const f of [0, 1e-6, 0.3, 1, 2.5, 10, 40]) {
+      const expected = 1234.5 * 2 ** -f
+      expect(Math.abs(decayed(1234.5, half, f * half) - expected) / expected).toBeLessThan(1e-14)
+    }
+  })
+
   it('keeps an unknown nuclide at its recorded activity, saying so', () => {
     expect(activityOn('Xx-999', 12, '2020-01-01', '2026-01-01')).toEqual({ nuclide: 'Xx-999', activityBq: 12, daughters: [], known: false })
   })
