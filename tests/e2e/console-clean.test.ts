@@ -29,6 +29,8 @@ beforeAll(async () => {
     { name: 'species-registry', path: '/species/registry' },
     { name: 'species-record', path: `/species/${species.id}` },
     { name: 'species-compare', path: `/species/compare?element=Fe&from=8&to=14` },
+    // a stripper plan and a breeding run: both beam charts drawn
+    { name: 'beam', path: '/beam?ion=208Pb27%2B&energy=4.2&unit=MeV%2Fu&medium=C&ad=20&ee=5000&j=250' },
     { name: 'certificates', path: '/certificates' },
     ...(certs[0] ? [{ name: 'certificate', path: `/certificates/${certs[0].id}` }, { name: 'verify', path: `/verify/${certs[0].number}`, anonymous: true }] : []),
     { name: 'scan', path: '/scan' },
