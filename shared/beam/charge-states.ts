@@ -120,8 +120,10 @@ export function baron(input: StripInput): ModelResult {
   const q1 = z * (1 - Math.exp((-83.275 * beta) / z ** 0.447))
   const mean = q1 * (1 - Math.exp(-12.905 + 0.2124 * z - 0.00122 * z * z))
   const y = q1 / z
-  const width = Math.sqrt(Math.max(q1 * (0.07535 + 0.19 * y - 0.2654 * y * y), 1e-6))
+  const variance = q1 * (0.07535 + 0.19 * y - 0.2654 * y * y)
+  const width = Math.sqrt(Math.max(variance, 1e-6))
   const warnings: string[] = []
+  if (variance <= 1e-6) warnings.push('Close to the bare ion the width formula gives no spread: the distribution shown is a single charge state, which the paper does not claim.')
   if (medium.phase === 'gas' || medium.label !== 'C') warnings.push('Fitted for carbon foils only; this stripper is not a carbon foil.')
   if (mevPerU < 1.3) warnings.push('Below about 1.3 MeV/u, under the range the paper fitted (from memory).')
   return finish(

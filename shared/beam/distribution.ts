@@ -48,7 +48,7 @@ export interface StripInput {
 
 /** Gaussian fractions of mean m and standard deviation d at q = 0…Z, normalised over that range. */
 export function gaussianFractions(z: number, mean: number, d: number): ChargeFraction[] {
-  return normalise(z, (q) => Math.exp(-0.5 * ((q - mean) / d) ** 2))
+  return normalise(z, mean, (q) => -0.5 * ((q - mean) / d) ** 2)
 }
 
 /**
@@ -56,17 +56,28 @@ export function gaussianFractions(z: number, mean: number, d: number): ChargeFra
  * 1 + ε t ≤ 0 the form has no meaning; those states get zero (far in the tail for the fitted ε).
  */
 export function sayerFractions(z: number, q0: number, rho: number, epsilon: number): ChargeFraction[] {
-  return normalise(z, (q) => {
+  return normalise(z, q0, (q) => {
     const t = (q - q0) / rho
     const den = 1 + epsilon * t
-    return den <= 0 ? 0 : Math.exp((-0.5 * t * t) / den)
+    return den <= 0 ? -Infinity : (-0.5 * t * t) / den
   })
 }
 
-function normalise(z: number, f: (q: number) => number): ChargeFraction[] {
-  const raw = Array.from({ length: z + 1 }, (_, q) => f(q))
+/**
+ * Fractions from the logarithm of an unnormalised shape, scaled by its largest value first so a
+ * narrow shape cannot underflow to all zeros; a shape that is zero everywhere puts the whole
+ * beam in the state nearest its centre.
+ */
+function normalise(z: number, centre: number, logF: (q: number) => number): ChargeFraction[] {
+  const logs = Array.from({ length: z + 1 }, (_, q) => logF(q))
+  const top = Math.max(...logs.filter((v) => !Number.isNaN(v)))
+  if (!Number.isFinite(top)) {
+    const at = Math.min(Math.max(Math.round(centre), 0), z)
+    return logs.map((_, charge) => ({ charge, fraction: charge === at ? 1 : 0 }))
+  }
+  const raw = logs.map((v) => (Number.isNaN(v) ? 0 : Math.exp(v - top)))
   const sum = raw.reduce((a, b) => a + b, 0)
-  return raw.map((v, charge) => ({ charge, fraction: sum > 0 ? v / sum : 0 }))
+  return raw.map((v, charge) => ({ charge, fraction: v / sum }))
 }
 
 /** A model's result with its most probable state filled in from its fractions. */

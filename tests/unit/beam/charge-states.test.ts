@@ -91,6 +91,17 @@ describe('distributions', () => {
     expect(sd).toBeCloseTo(2.1, 3)
   })
 
+  it('a width far below one charge still puts the whole beam in the state nearest the mean, and says so', () => {
+    // Baron's width formula goes to zero for a nearly bare ion (Pb at 999 MeV/u): the Gaussian
+    // would underflow to zero everywhere without scaling by its largest term.
+    const baronPb = stripPlan({ ion: '208Pb82+', energy: 999, medium: 'C' }).models.find((m) => m.model === 'baron-1993')!
+    expect(baronPb.fractions.reduce((s, f) => s + f.fraction, 0)).toBeCloseTo(1, 12)
+    expect(baronPb.mostProbable).toBe(Math.round(baronPb.meanCharge))
+    expect(baronPb.warnings.join(' ')).toMatch(/no spread/)
+    const f = gaussianFractions(10, 4.3, 1e-3)
+    expect(f[4]!.fraction).toBe(1)
+  })
+
   it("Sayer's shape leans towards low charges when ε < 0 and is symmetric when ε = 0", () => {
     const sym = sayerFractions(82, 50, 2, 0)
     expect(sym[48]!.fraction).toBeCloseTo(sym[52]!.fraction, 12)
