@@ -99,7 +99,7 @@ export function schiwietzGrande2004(input: StripInput): ModelResult | NotApplica
       model: 'schiwietz-grande-2004',
       source: SG2004,
       coefficients:
-        "mean charge read from N. Medvedev's TREKIS-4 (SHI_charge_state.f90) and the catima library (calculations.cpp), both citing the paper; the 2004 paper's own width formula could not be read, so the width is the 2001 paper's formula taken at this mean",
+        "read from N. Medvedev's TREKIS-4 (SHI_charge_state.f90) and the catima library (calculations.cpp), both citing the paper; the 2004 paper's own width formula could not be read, so the width is the 2001 paper's formula taken at this mean",
       range: 'Solid strippers only, all projectiles; the paper’s stated accuracy could not be read',
       shape: 'gaussian',
       meanCharge: mean,
