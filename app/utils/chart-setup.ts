@@ -12,6 +12,9 @@ export const METHOD_COLOURS: Readonly<Record<string, string>> = {
   'dirac-qed-hydrogen-like': '#15803d',
   'scf-delta': '#2563eb',
   'scf-eigenvalue': '#db2777',
+  'dirac-scf-delta': '#0891b2',
+  'dirac-scf-eigenvalue': '#c2410c',
+  'dirac-scf-delta-qed': '#4f46e5',
 }
 export const REFERENCE_COLOUR = '#0f172a'
 const OTHER_COLOUR = '#64748b'

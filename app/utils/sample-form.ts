@@ -51,17 +51,20 @@ export interface SampleFormState {
   components: ComponentRow[]
 }
 
-let nextKey = 1
+// Row keys (they also name the inputs' ids). The form's first rows are numbered from 1 inside
+// formState, so the server's HTML and the browser's first render agree; rows added later, in the
+// browser only, take keys from a range the first rows never reach.
+let nextKey = 1_000_000
 const text = (v: unknown) => (v === null || v === undefined ? '' : String(v))
 
 /** An empty composition row. */
-export function blankComponent(): ComponentRow {
-  return { key: nextKey++, z: '', massNumber: '', fraction: '', enrichmentPercent: '', fractionUncertainty: '', enrichmentUncertainty: '', isotopics: 'enrichment', analysis: [] }
+export function blankComponent(key = nextKey++): ComponentRow {
+  return { key, z: '', massNumber: '', fraction: '', enrichmentPercent: '', fractionUncertainty: '', enrichmentUncertainty: '', isotopics: 'enrichment', analysis: [] }
 }
 
 /** An analysis line, blank or filled. */
-export function analysisLine(massNumber = '', percent = '', uncertainty = ''): AnalysisLine {
-  return { key: nextKey++, massNumber, percent, uncertainty }
+export function analysisLine(massNumber = '', percent = '', uncertainty = '', key = nextKey++): AnalysisLine {
+  return { key, massNumber, percent, uncertainty }
 }
 
 interface StoredSample {
@@ -83,6 +86,7 @@ interface StoredSample {
 /** The form's text for a stored sample, or for a new one. */
 export function formState(s?: StoredSample | null): SampleFormState {
   const f = (k: string) => text(s?.[k])
+  let key = 1
   return {
     name: f('name'), material: f('material'), formula: f('formula'), form: f('form') || 'foil', status: s && s.status !== 'retired' ? f('status') : 'available',
     arealDensity: f('arealDensity'), arealDensityUncertainty: f('arealDensityUncertainty'), thickness: f('thickness'), bulkDensity: f('bulkDensity'), massMg: f('massMg'),
@@ -91,7 +95,7 @@ export function formState(s?: StoredSample | null): SampleFormState {
     basis: s?.components[0]?.basis === 'mass' ? 'mass' : 'atom',
     components: s?.components.length
       ? s.components.map((c) => ({
-          key: nextKey++,
+          key: key++,
           z: text(c.z),
           massNumber: text(c.massNumber),
           fraction: text(c.fraction),
@@ -99,9 +103,9 @@ export function formState(s?: StoredSample | null): SampleFormState {
           fractionUncertainty: text(c.fractionUncertainty),
           enrichmentUncertainty: text(c.enrichmentUncertainty),
           isotopics: c.analysis?.length ? ('analysis' as const) : ('enrichment' as const),
-          analysis: (c.analysis ?? []).map((r) => analysisLine(text(r.massNumber), text(r.percent), text(r.uncertainty))),
+          analysis: (c.analysis ?? []).map((r) => analysisLine(text(r.massNumber), text(r.percent), text(r.uncertainty), key++)),
         }))
-      : [blankComponent()],
+      : [blankComponent(key++)],
   }
 }
 

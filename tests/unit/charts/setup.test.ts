@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest'
-import { axisTitle, isDrawn, methodColour, seriesColour, spreadColour, withChartDefaults } from '../../../app/utils/chart-setup'
+import { axisTitle, isDrawn, methodColour, REFERENCE_COLOUR, seriesColour, spreadColour, withChartDefaults } from '../../../app/utils/chart-setup'
+import { METHOD_NAMES } from '../../../shared/physics/methods'
 
 // The legend's filter as chart.js calls it: once per dataset, with the chart's data.
 function legendNames(config: any): string[] {
@@ -76,5 +77,12 @@ describe('the set-up every chart shares', () => {
     expect(spreadColour(4, 5)).toBe('hsl(300 70% 40%)')
     expect(spreadColour(0, 1)).toBe('hsl(0 70% 40%)')
     expect(axisTitle('r / bohr')).toEqual({ display: true, text: 'r / bohr' })
+  })
+
+  it('gives every ionisation-energy method of the engine a colour of its own, none the reference ink', () => {
+    const colours = METHOD_NAMES.map((m) => methodColour(m))
+    expect(colours).not.toContain('#64748b')
+    expect(new Set(colours).size).toBe(METHOD_NAMES.length)
+    expect(colours).not.toContain(REFERENCE_COLOUR)
   })
 })
