@@ -23,5 +23,5 @@ if (!process.argv.includes('--yes')) {
 const storage = path.join(ROOT, 'storage')
 const pgDir = clusterDir(path.join(storage, 'postgres'))
 if (existsSync(path.join(pgDir, 'data', 'PG_VERSION'))) startPostgres({ dir: pgDir, port: Number(process.env.IONFOLIO_PG_PORT ?? 55432) }).stop()
-for (const dir of [pgDir, path.join(storage, 'postgres'), path.join(storage, 'objects'), path.join(storage, 'mail')]) rmSync(dir, { recursive: true, force: true })
+for (const dir of [pgDir, path.join(storage, 'postgres'), path.join(storage, 'objects'), path.join(storage, 'mail'), path.join(storage, 'database-logins.json')]) rmSync(dir, { recursive: true, force: true })
 console.log('Demo data removed; `npm start` seeds it afresh.')

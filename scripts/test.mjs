@@ -64,6 +64,7 @@ try {
     IONFOLIO_TEST_MAIL_DIR: services.mailer.spool,
     // Fixtures and fault set-ups use the superuser; tests/api/db-privileges.test.ts uses the app's login.
     IONFOLIO_TEST_ADMIN_DATABASE_URL: services.adminDatabaseUrl,
+    IONFOLIO_TEST_OWNER_DATABASE_URL: services.migrationEnv.IONFOLIO_MIGRATION_DATABASE_URL,
     IONFOLIO_TEST_PG_DATA: services.pg.data,
     IONFOLIO_TEST_PG_PORT: String(ports.postgres),
     IONFOLIO_TEST_TMP: tmp,

@@ -2,6 +2,7 @@
 // and the NUXT_* environment that points the app at them (`migrationEnv` adds the owner's
 // connection for migrations and seeds).
 import path from 'node:path'
+import { writeFileSync, chmodSync } from 'node:fs'
 import { startPostgres, clusterDir } from './postgres.mjs'
 import { startObjectStore } from './objectstore.mjs'
 import { startMailInbox, startMailSpool } from './mail.mjs'
@@ -40,6 +41,11 @@ export async function startServices({ storage, ports, database, mail }) {
     }
     // Migrations and seeds run as the owner; the app gets only `env` and never the owner's login.
     const migrationEnv = { ...env, IONFOLIO_MIGRATION_DATABASE_URL: pg.roleUrl('owner', database) }
+    // The command-line tools (precompute, reconcile, audit-verify, db) find this cluster's logins
+    // here when no NUXT_DATABASE_URL is set (knex.config.ts); readable by this user only.
+    const logins = path.join(storage, 'database-logins.json')
+    writeFileSync(logins, JSON.stringify({ app: env.NUXT_DATABASE_URL, owner: migrationEnv.IONFOLIO_MIGRATION_DATABASE_URL }, null, 2) + '\n', { mode: 0o600 })
+    chmodSync(logins, 0o600)
     return { pg, store, mailer, env, migrationEnv, adminDatabaseUrl: pg.url(database), stop: stopAll }
   } catch (e) {
     await stopAll()

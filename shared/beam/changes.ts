@@ -26,12 +26,16 @@ export function planChanges(
 ): PlanChange[] {
   const out: PlanChange[] = []
   if (before.strip.engine !== after.strip.engine) out.push({ what: 'engine version', before: before.strip.engine, after: after.strip.engine })
-  const models = new Set([...before.strip.models.map((m) => m.model), ...after.strip.models.map((m) => m.model)])
+  const named = (s: StripPlan) => [...s.models.map((m) => m.model), ...(s.notApplicable ?? []).map((m) => m.model)]
+  const state = (s: StripPlan, name: string) => (s.models.some((m) => m.model === name) ? 'present' : s.notApplicable?.some((m) => m.model === name) ? 'not applicable' : 'absent')
+  const models = new Set([...named(before.strip), ...named(after.strip)])
   for (const name of models) {
     const a = before.strip.models.find((m) => m.model === name)
     const b = after.strip.models.find((m) => m.model === name)
     if (!a || !b) {
-      out.push({ what: `model ${name}`, before: a ? 'present' : 'absent', after: b ? 'present' : 'absent' })
+      const was = state(before.strip, name)
+      const now = state(after.strip, name)
+      if (was !== now) out.push({ what: `model ${name}`, before: was, after: now })
       continue
     }
     compare(out, `${name}: mean charge`, a.meanCharge, b.meanCharge)

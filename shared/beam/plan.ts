@@ -5,7 +5,7 @@
 import { formatSpecies, getElement, parseSpecies, SpeciesParseError } from '../physics/index'
 import { breed, type BreedResult } from './breeding'
 import type { BindingSources } from './binding'
-import { chargeStateModels, type ModelResult } from './charge-states'
+import { chargeStateEstimates, type ModelResult, type NotApplicableModel } from './charge-states'
 import { defaultMassNumber, energyForms, ionMass, motion, rigidity, type EnergyForms, type EnergyUnit, type Rigidity } from './kinematics'
 import { MediumError, parseMedium, type Medium } from './media'
 import { energyLoss, type EnergyLoss, type NotEstimated } from './stopping'
@@ -58,6 +58,8 @@ export interface StripPlan {
   medium: string
   mediumDetail: Pick<Medium, 'phase' | 'zEff' | 'iEv' | 'notes'>
   models: ModelResult[]
+  /** formulas that give no number for this stripper, with the reason (engine 1.1.0 on; absent before) */
+  notApplicable?: NotApplicableModel[]
   rigidity: (Rigidity & { mevPerU: number })[]
   rigidityNote: string
   energyLoss?: EnergyLoss | NotEstimated
@@ -83,7 +85,7 @@ export function stripPlan(req: StripRequest): StripPlan {
   if (forms.mevPerU > 1000) throw new BeamInputError('energy', 'energy above 1000 MeV/u is outside every formula here')
   if (forms.mevPerU < 0.01) warnings.push('Below 10 keV/u: every formula here is far outside its range.')
   if (ion.massNumberAssumed) warnings.push(`No isotope named: the most abundant, ${ion.massNumber}${ion.symbol}, is assumed.`)
-  const models = chargeStateModels({ z: ion.z, beta: m.beta, vOverV0: m.vOverV0, mevPerU: forms.mevPerU, medium })
+  const { models, notApplicable } = chargeStateEstimates({ z: ion.z, beta: m.beta, vOverV0: m.vOverV0, mevPerU: forms.mevPerU, medium })
 
   let loss: EnergyLoss | NotEstimated | undefined
   if (req.arealDensityUgCm2 !== undefined) {
@@ -113,6 +115,7 @@ export function stripPlan(req: StripRequest): StripPlan {
     medium: medium.label,
     mediumDetail: { phase: medium.phase, zEff: medium.zEff, iEv: medium.iEv, notes: medium.notes },
     models,
+    notApplicable,
     rigidity: rig,
     rigidityNote: loss?.estimated
       ? 'After the stripper, at the exit energy (entry energy less the estimated loss), for every state any model gives ≥ 0.1 %.'

@@ -113,6 +113,7 @@ export function energyLoss(opts: {
     uncertainty = 0.3
     warnings.push('Heavy stripper below 5 MeV/u: shell corrections left out of this estimate matter; take it as ±30 %.')
   }
+  if (opts.mevPerU > 100) warnings.push('Above about 100 MeV/u the density effect, left out of this estimate, begins to lower the stopping: take the loss as an upper estimate.')
   const loss = opts.mevPerU - e
   if (loss / opts.mevPerU > 0.05) warnings.push('The foil takes more than 5 % of the energy: the charge-state estimate uses the entry energy.')
   return {

@@ -11,18 +11,21 @@ export function formatStrip(p: StripPlan): string {
   lines.push(`${p.ion} at ${e.mevPerU.toFixed(4)} MeV/u (${e.totalMeV.toFixed(3)} MeV total, ${e.mevPerNucleon.toFixed(4)} MeV/nucleon; β = ${e.beta.toFixed(5)}) through ${p.medium} (${p.mediumDetail.phase})`)
   lines.push('')
   const shown = p.rigidity.map((r) => r.charge)
-  lines.push(`charge  ${p.models.map((m) => m.model.padStart(24)).join('')}   Bρ [T·m]   Eρ [MV]`)
+  const absent = p.notApplicable ?? []
+  const na = absent.map(() => 'n/a'.padStart(24)).join('')
+  lines.push(`charge  ${[...p.models, ...absent].map((m) => m.model.padStart(24)).join('')}   Bρ [T·m]   Eρ [MV]`)
   for (const q of shown) {
     const r = p.rigidity.find((x) => x.charge === q)!
-    lines.push(`${String(q).padStart(5)}+  ${p.models.map((m) => `${pct(m.fractions[q]?.fraction ?? 0)} %`.padStart(24)).join('')}   ${r.tm.toFixed(5).padStart(8)}   ${r.mv.toFixed(3).padStart(8)}`)
+    lines.push(`${String(q).padStart(5)}+  ${p.models.map((m) => `${pct(m.fractions[q]?.fraction ?? 0)} %`.padStart(24)).join('')}${na}   ${r.tm.toFixed(5).padStart(8)}   ${r.mv.toFixed(3).padStart(8)}`)
   }
-  lines.push(`mean    ${p.models.map((m) => m.meanCharge.toFixed(2).padStart(24)).join('')}`)
-  lines.push(`width   ${p.models.map((m) => m.width.toFixed(2).padStart(24)).join('')}`)
+  lines.push(`mean    ${p.models.map((m) => m.meanCharge.toFixed(2).padStart(24)).join('')}${na}`)
+  lines.push(`width   ${p.models.map((m) => m.width.toFixed(2).padStart(24)).join('')}${na}`)
   lines.push('')
   for (const m of p.models) {
     lines.push(`${m.model}: ${m.source}; range: ${m.range}`)
     for (const w of m.warnings) lines.push(`  ! ${w}`)
   }
+  for (const n of absent) lines.push(`${n.model}: ${n.source}; not applicable: ${n.reason}`)
   if (p.energyLoss) {
     lines.push('')
     if (p.energyLoss.estimated) {

@@ -13,7 +13,8 @@ describe('GET /api/beam/charge-states and /api/beam/breeding', () => {
     const r = await c.technician.get('/api/beam/charge-states?ion=208Pb27%2B&energy=4.2&medium=C&arealDensity=20')
     expect(r.status).toBe(200)
     expect(r.body).toMatchObject({ ion: '208Pb27+', energyMeVPerU: 4.2, medium: 'C' })
-    expect(r.body.models).toHaveLength(4)
+    expect(r.body.models.map((m: { model: string }) => m.model)).toEqual(['schiwietz-grande-2001', 'schiwietz-grande-2004', 'nikolaev-dmitriev-1968', 'sayer-1977', 'baron-1993'])
+    expect(r.body.notApplicable).toEqual([])
     expect(r.body.rigidity.length).toBeGreaterThan(5)
     expect(r.body.energyLoss.estimated).toBe(true)
   })
@@ -37,6 +38,43 @@ describe('GET /api/beam/charge-states and /api/beam/breeding', () => {
     const r = await c.scientist.get(`/api/beam/charge-states?${query}`)
     expect(r.status).toBe(400)
     expect(r.body.data.issues.map((i: { path: string }) => i.path)).toContain(field)
+  })
+
+  it('a solid-only formula is listed as not applicable for a gas stripper, with its reason', async () => {
+    const r = await c.scientist.get('/api/beam/charge-states?ion=12C1-&energy=0.21&medium=Ar&gas=true')
+    expect(r.status).toBe(200)
+    expect(r.body.models.map((m: { model: string }) => m.model)).not.toContain('schiwietz-grande-2004')
+    expect(r.body.notApplicable).toEqual([{ model: 'schiwietz-grande-2004', source: expect.stringContaining('2004'), reason: expect.stringMatching(/solid strippers only/) }])
+  })
+
+  // Edges: a proton, bare nuclei, the lowest and highest energies accepted; every number finite.
+  it.each([
+    'ion=1H1%2B&energy=1&medium=C',
+    'ion=H&energy=0.000001&medium=Au&arealDensity=1',
+    'ion=208Pb82%2B&energy=999&medium=C&arealDensity=50',
+    'ion=238U92%2B&energy=0.01&medium=He&gas=true',
+    'ion=Og&energy=5&medium=CH2',
+  ])('%s answers 200 with no NaN or infinity anywhere', async (query) => {
+    const r = await c.scientist.get(`/api/beam/charge-states?${query}`)
+    expect(r.status).toBe(200)
+    // JSON writes NaN and ±Infinity as null: no number field of the answer may be null.
+    const holesIn = (x: unknown): boolean => x === null || (typeof x === 'number' && !Number.isFinite(x)) || (typeof x === 'object' && Object.values(x as object).some(holesIn))
+    for (const part of ['models', 'rigidity', 'energy', 'energyLoss', 'ionDetail', 'mediumDetail']) expect(holesIn(r.body[part] ?? {}), part).toBe(false)
+    for (const m of r.body.models) expect(m.fractions.reduce((a: number, f: { fraction: number }) => a + f.fraction, 0)).toBeCloseTo(1, 9)
+  })
+
+  it.each([
+    ['ion=Pb&energy=5000&medium=C', 'energy'],
+    ['ion=Pb&energy=1e400&medium=C', 'energy'],
+    ['ion=Pb&energy=Infinity&medium=C', 'energy'],
+    ['ion=Pb%00&energy=1&medium=C', 'ion'],
+    ['ion=Pb&energy=1&medium=C%00', 'medium'],
+    ['ion=Pb83%2B&energy=1&medium=C', 'ion'],
+    ['ion=Pb&energy=1&medium=C&arealDensity=0', 'arealDensity'],
+  ])('an absurd query (%s) is a 400 naming %s, never a 500', async (query, field) => {
+    const r = await c.scientist.get(`/api/beam/charge-states?${query}`)
+    expect(r.status).toBe(400)
+    expect(JSON.stringify(r.body.data.issues)).toContain(field)
   })
 
   it('answers the breed question with steps and breeding factors', async () => {
@@ -82,7 +120,7 @@ describe('saved plans', () => {
     expect(audit[0].action).toBe('beam_plan.saved')
     const one = await c.technician.get(`/api/beam/plans/${planId}`)
     expect(one.status).toBe(200)
-    expect(one.body.result.strip.models).toHaveLength(4)
+    expect(one.body.result.strip.models).toHaveLength(5)
     expect(one.body.inputs.arealDensity).toBe(20)
   })
 

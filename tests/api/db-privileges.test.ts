@@ -90,11 +90,55 @@ describe('the app role', () => {
   })
 })
 
+describe('the local cluster', () => {
+  // Every login needs its own password, on TCP and on the socket: holding the app's login (or
+  // reading this repository) is no way into the superuser's or the owner's.
+  const withPassword = (url: string, password: string | null) => {
+    const u = new URL(url)
+    u.password = password ?? ''
+    return u.toString()
+  }
+  const refused = async (connection: string) => {
+    const db = knexFactory({ client: 'pg', connection, pool: { min: 0, max: 1 }, acquireConnectionTimeout: 5_000 })
+    try {
+      await db.raw('select 1')
+      return false
+    } catch (e) {
+      return /password authentication failed|no password supplied|SASL|password must be a string/i.test(String((e as Error).message))
+    } finally {
+      await db.destroy()
+    }
+  }
+
+  it('refuses the superuser, the owner and the app without their passwords or with the app password', async () => {
+    const admin = process.env.IONFOLIO_TEST_ADMIN_DATABASE_URL!
+    const owner = process.env.IONFOLIO_TEST_OWNER_DATABASE_URL!
+    const appUrl = process.env.NUXT_DATABASE_URL!
+    const appPassword = new URL(appUrl).password
+    expect(appPassword.length).toBeGreaterThanOrEqual(32)
+    expect(await refused(withPassword(admin, null))).toBe(true)
+    expect(await refused(withPassword(admin, appPassword))).toBe(true)
+    expect(await refused(withPassword(owner, appPassword))).toBe(true)
+    expect(await refused(withPassword(owner, 'ionfolio-owner-local'))).toBe(true)
+    expect(await refused(withPassword(appUrl, 'not-the-password'))).toBe(true)
+    // and the real passwords do get in (so the refusals above are about the password)
+    expect(await refused(appUrl)).toBe(false)
+    expect(await refused(owner)).toBe(false)
+  })
+
+  it('has no trust rule left in pg_hba.conf', async () => {
+    const { readFileSync } = await import('node:fs')
+    const rules = readFileSync(`${process.env.IONFOLIO_TEST_PG_DATA}/pg_hba.conf`, 'utf8').split('\n').filter((l) => l.trim() && !l.trim().startsWith('#'))
+    expect(rules.length).toBeGreaterThan(0)
+    expect(rules.filter((l) => /\btrust\b/.test(l))).toEqual([])
+  })
+})
+
 describe('a table a later migration makes append-only', () => {
   it('is protected by the same triggers and revokes (migrations/lib/append-only.ts)', async () => {
     const admin = testDb()
     const { makeAppendOnly } = await import('../../migrations/lib/append-only')
-    const owner = knexFactory({ client: 'pg', connection: process.env.IONFOLIO_TEST_ADMIN_DATABASE_URL!.replace('postgres@', 'ionfolio_owner:ionfolio-owner-local@'), pool: { min: 0, max: 1 } })
+    const owner = knexFactory({ client: 'pg', connection: process.env.IONFOLIO_TEST_OWNER_DATABASE_URL, pool: { min: 0, max: 1 } })
     try {
       await owner.raw('drop table if exists test_ledger')
       // Made by the owner, as a migration would: the default privileges give the app its rows.

@@ -26,6 +26,10 @@ describe('GET /api/species/lookup', () => {
       again = await clients.scientist.get('/api/species/lookup?q=Ar%208%2B')
     }
     expect(again.body.scfStatus).toBe('cached')
+    // a repeat is served from the kept answer: the same JSON, still typed as JSON
+    const repeat = await clients.scientist.get('/api/species/lookup?q=Ar%208%2B')
+    expect(repeat.headers.get('content-type')).toMatch(/^application\/json/)
+    expect(repeat.body).toEqual(again.body)
     const { execFileSync } = await import('node:child_process')
     const line = execFileSync(process.execPath, ['--import', 'tsx', 'scripts/species.ts', '--json', 'Ar 8+'], { encoding: 'utf8' }).trim()
     expect(again.body).toEqual(JSON.parse(line))

@@ -1,6 +1,10 @@
 import { describe, expect, it } from 'vitest'
 import { breedPlan, integratePopulations, lotzCrossSection, subshellBindings } from '../../../shared/beam/index'
 
+// The issue asks for a one-electron ion such as hydrogen-like Mo: those were measured in an
+// electron-beam ion trap (R. E. Marrs, S. R. Elliott and J. H. Scofield, Phys. Rev. A 56, 1338
+// (1997): H-like Mo, Dy, Au, Bi at 1.3–3.9 times threshold), but only the abstract could be
+// read, not the values; He⁺ stands in.
 describe('Lotz cross-sections', () => {
   it('He+ (one electron) near its maximum: measured ≈ 4.5e-18 cm² at 200 eV (Peart, Walton & Dolder, J. Phys. B 2, 1347 (1969) — from memory), within the ±40 % the formula carries', () => {
     const subs = subshellBindings(2, 1)

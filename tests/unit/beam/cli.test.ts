@@ -20,7 +20,7 @@ describe('the beam command line', () => {
     expect(foil.status).toBe(0)
     const p = JSON.parse(foil.stdout.trim())
     expect(p).toMatchObject({ ion: '208Pb27+', energyMeVPerU: 4.2, medium: 'C' })
-    expect(p.models.map((m: { model: string }) => m.model)).toEqual(['schiwietz-grande-2001', 'nikolaev-dmitriev-1968', 'sayer-1977', 'baron-1993'])
+    expect(p.models.map((m: { model: string }) => m.model)).toEqual(['schiwietz-grande-2001', 'schiwietz-grande-2004', 'nikolaev-dmitriev-1968', 'sayer-1977', 'baron-1993'])
     for (const m of p.models) {
       expect(Object.keys(m)).toEqual(expect.arrayContaining(['model', 'source', 'meanCharge', 'width', 'fractions', 'warnings']))
       expect(m.fractions[0]).toEqual({ charge: 0, fraction: expect.any(Number) })
@@ -32,6 +32,10 @@ describe('the beam command line', () => {
     const g = JSON.parse(gas.stdout.trim())
     expect(g).toMatchObject({ ion: '12C-', energyMeVPerU: 0.21, medium: 'Ar' })
     expect(g.energyLoss).toBeUndefined()
+    // a solid-only formula gives no number for a gas: it is not among the models, and says why
+    expect(g.models.map((m: { model: string }) => m.model)).not.toContain('schiwietz-grande-2004')
+    expect(g.notApplicable).toEqual([expect.objectContaining({ model: 'schiwietz-grande-2004', reason: expect.stringMatching(/solid strippers only/) })])
+    expect(p.notApplicable).toEqual([])
   })
 
   it('breed --json answers steps and breeding with the contract fields; a bad ion is an error line and status 1', () => {

@@ -44,4 +44,11 @@ describe('energy loss in the foil', () => {
     expect(slow).toMatchObject({ estimated: false })
     if (!slow.estimated) expect(slow.reason).toMatch(/not estimated here/)
   })
+
+  it('warns above ~100 MeV/u, where the density effect it leaves out begins to matter (the bound stated in stopping.ts)', () => {
+    const fast = stripPlan({ ion: '208Pb82+', energy: 500, medium: 'C', arealDensityUgCm2: 50 }).energyLoss
+    expect(fast?.estimated && fast.warnings.join(' ')).toMatch(/density effect/)
+    const slow = stripPlan({ ion: '208Pb27+', energy: 4.2, medium: 'C', arealDensityUgCm2: 20 }).energyLoss
+    expect(slow?.estimated && slow.warnings.join(' ')).not.toMatch(/density effect/)
+  })
 })
