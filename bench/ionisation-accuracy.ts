@@ -20,7 +20,7 @@
 import { writeFileSync } from 'node:fs'
 import { pathToFileURL } from 'node:url'
 import { CLASS_KEYS, speciesClass } from '../shared/physics/best-estimate'
-import { METHODS, describeSpecies, referenceIonisationEv } from '../shared/physics/index'
+import { METHODS, describeSpecies, getElement, referenceIonisationEv } from '../shared/physics/index'
 import type { ScfSpeciesEstimates } from '../shared/physics/scf/types'
 
 export interface MethodProvider {
@@ -92,6 +92,8 @@ interface Measured {
   ref: number
   /** |deviation| in percent by method, for the methods that gave a number */
   byMethod: Map<string, number>
+  /** the same with its sign (estimate above the reference: positive) */
+  signed: Map<string, number>
 }
 
 function measure(): Measured[] {
@@ -101,11 +103,14 @@ function measure(): Measured[] {
       const ref = reference(z, charge)
       if (ref === null) continue
       const byMethod = new Map<string, number>()
+      const signed = new Map<string, number>()
       for (const p of providers) {
         const eV = p.estimate(z, charge)
-        if (eV !== null) byMethod.set(p.method, (100 * Math.abs(eV - ref)) / ref)
+        if (eV === null) continue
+        signed.set(p.method, (100 * (eV - ref)) / ref)
+        byMethod.set(p.method, (100 * Math.abs(eV - ref)) / ref)
       }
-      species.push({ z, charge, ref, byMethod })
+      species.push({ z, charge, ref, byMethod, signed })
     }
   }
   return species
@@ -128,14 +133,23 @@ export function classFigures(species: readonly Measured[] = measure()): ClassFig
 }
 
 /** The best method for one species by the class figures (smallest class mean among those with a number). */
-function bestDeviation(s: Measured, figures: ClassFigures): number | null {
-  let best: [number, number] | null = null
+function bestMethod(s: Measured, figures: ClassFigures): string | null {
+  let best: [number, string] | null = null
   for (const [method, meanPercent, n] of figures[speciesClass(s.z, s.charge).key] ?? []) {
-    const deviation = s.byMethod.get(method)
-    if (deviation === undefined || n < 3) continue
-    if (!best || meanPercent < best[0]) best = [meanPercent, deviation]
+    if (!s.byMethod.has(method) || n < 3) continue
+    if (!best || meanPercent < best[0]) best = [meanPercent, method]
   }
   return best ? best[1] : null
+}
+
+function bestDeviation(s: Measured, figures: ClassFigures): number | null {
+  const method = bestMethod(s, figures)
+  return method === null ? null : Math.abs(s.signed.get(method)!)
+}
+
+function bestSigned(s: Measured, figures: ClassFigures): number | null {
+  const method = bestMethod(s, figures)
+  return method === null ? null : s.signed.get(method)!
 }
 
 /** Writes the class figures as the generated data file the engine reads. */
@@ -190,6 +204,16 @@ export function runAccuracyBench(out: (line: string) => void = (l) => process.st
   out(line(head))
   out(widths.map((w) => '-'.repeat(w)).join('  '))
   for (const r of rows) out(line(r))
+  out('')
+  // issue 11's target: no heavy highly charged ion beyond 3 % with the estimate the page leads with
+  const heavy = species.filter((s) => s.z >= 36 && s.charge >= 5)
+  const beyond = heavy
+    .map((s) => ({ s, signed: bestSigned(s, figures) }))
+    .filter((x): x is { s: Measured; signed: number } => x.signed !== null && Math.abs(x.signed) > 3)
+  out(`Heavy highly charged ions (Z ≥ 36, q ≥ 5) beyond 3 % with the best estimate: ${beyond.length} of ${heavy.length}`)
+  for (let i = 0; i < beyond.length; i += 8) {
+    out(`  ${beyond.slice(i, i + 8).map(({ s, signed }) => `${getElement(s.z)?.symbol ?? s.z}${s.charge}+ ${signed > 0 ? '+' : '−'}${Math.abs(signed).toFixed(1)}`).join(', ')}`)
+  }
   out('')
   out('Best estimate by class (mean |deviation| %, species): the method the species page leads with')
   for (const key of CLASS_KEYS) {

@@ -20,10 +20,15 @@ const Z_BANDS = [
   { max: 118, key: 'heavy', text: 'Z ≥ 55' },
 ] as const
 
-/** The class a species belongs to, for the accuracy figures (one-electron and negative ions apart). */
+/**
+ * The class a species belongs to, for the accuracy figures (one-, two- and three-electron ions
+ * and negative ions apart: the few-electron ions have methods of their own).
+ */
 export function speciesClass(z: number, charge: number): SpeciesClass {
   if (charge < 0) return { key: 'negative', label: 'negative ions' }
   if (z - charge === 1) return { key: 'one-electron', label: 'one-electron ions' }
+  if (z - charge === 2 && charge > 0) return { key: 'he-like', label: 'He-like ions' }
+  if (z - charge === 3 && charge > 0) return { key: 'li-like', label: 'Li-like ions' }
   const band = Z_BANDS.find((b) => z <= b.max) ?? Z_BANDS[2]
   if (charge === 0) return { key: `${band.key}-neutral`, label: `neutral atoms, ${band.text}` }
   if (charge <= 4) return { key: `${band.key}-low`, label: `ions of charge 1–4, ${band.text}` }
@@ -34,6 +39,8 @@ export function speciesClass(z: number, charge: number): SpeciesClass {
 export const CLASS_KEYS: readonly string[] = [
   ...Z_BANDS.flatMap((b) => [`${b.key}-neutral`, `${b.key}-low`, `${b.key}-high`]),
   'one-electron',
+  'he-like',
+  'li-like',
   'negative',
 ]
 

@@ -10,6 +10,13 @@
  * 4f3 that NIST ASD gives (Nd IV 4I9/2, from memory), and U³⁺ would lose 6p before 5f. A curated
  * table of ions whose NIST ground configuration departs from the rule overrides it.
  *
+ * Heavy ions (Z ≥ 57, charge 5 and up, fewer charges than electrons): 4f (5f) competes with
+ * 5s/5p (6s/6p) and no filling order holds across the charge states (In-like Yb²¹⁺ is 4d10 4f3
+ * in NIST ASD, not the rule's 4d10 5s2 5p; tungsten ions lose 4f before 5s from W¹³⁺ on). There the
+ * ground configuration is the one of lowest Dirac–Kohn–Sham total energy among those that share
+ * the electrons among the outer subshells (scf/configuration-search.ts), computed once and
+ * tabulated in data/dks-configurations.ts where it is not the rule's.
+ *
  * Highly charged ions: once the charge is at least the number of electrons left (Z ≥ 2N) the
  * nuclear field dominates and the levels follow the hydrogenic order, n first and then l
  * (common practice, no source); the engine fills N electrons in that order. The removal rule
@@ -20,12 +27,13 @@
  * Anions (charge −1): the neutral configuration plus one electron in the first subshell in
  * Madelung order that has room, except the anions tabulated in data/irregular.ts.
  */
+import { DKS_GROUND_CONFIGURATIONS } from './data/dks-configurations'
 import { IRREGULAR_ANIONS, IRREGULAR_IONS } from './data/irregular'
 import { MAX_Z, symbolOf } from './elements'
-import { addMadelungElectron, highestFirst, hydrogenicFill, neutralSubshells, removeElectrons } from './filling'
+import { addMadelungElectron, energySearchDomain, highestFirst, hydrogenicFill, neutralSubshells, removeElectrons } from './filling'
 import { type Subshell, formatConfiguration, formatWithCore, parseConfiguration } from './subshells'
 
-export { removalRuleConfiguration } from './filling'
+export { energySearchDomain, removalRuleConfiguration } from './filling'
 
 export type ConfigurationRule =
   | 'madelung'
@@ -33,6 +41,7 @@ export type ConfigurationRule =
   | 'removal-rule'
   | 'hydrogenic-order'
   | 'irregular-ion'
+  | 'lowest-dks-energy'
   | 'anion-madelung'
   | 'irregular-anion'
   | 'bare-nucleus'
@@ -56,6 +65,11 @@ export interface GroundConfiguration {
 }
 
 const TABLE = new Map([...IRREGULAR_IONS, ...IRREGULAR_ANIONS].map((e) => [`${e.z}:${e.charge}`, e]))
+const BY_ENERGY = new Map(DKS_GROUND_CONFIGURATIONS.map(([z, charge, configuration]) => [`${z}:${charge}`, configuration]))
+
+/** The source named for a configuration chosen by energy. */
+export const LOWEST_DKS_ENERGY_SOURCE =
+  'lowest Dirac–Kohn–Sham total energy of the competing configurations (the engine\'s own relativistic solver; data/dks-configurations.ts)'
 
 // One frozen object per (n, l, occupancy), shared by every cached configuration: a listing of
 // all species then holds arrays of a few hundred objects instead of a hundred thousand.
@@ -108,6 +122,10 @@ function compute(z: number, charge: number): GroundConfiguration {
   } else if (charge >= electrons) {
     subshells = hydrogenicFill(electrons)
     rule = 'hydrogenic-order'
+  } else if (energySearchDomain(z, charge) && BY_ENERGY.has(`${z}:${charge}`)) {
+    subshells = parseConfiguration(BY_ENERGY.get(`${z}:${charge}`)!)
+    rule = 'lowest-dks-energy'
+    source = LOWEST_DKS_ENERGY_SOURCE
   } else {
     subshells = removeElectrons(z, neutralSubshells(z).subshells, charge)
     rule = 'removal-rule'

@@ -24,6 +24,15 @@ function neutralCore(z: number, neutral: readonly Subshell[]): Subshell[] {
   return core
 }
 
+/**
+ * The ions whose ground configuration is chosen by the lowest Dirac–Kohn–Sham total energy
+ * (scf/configuration-search.ts, tabulated in data/dks-configurations.ts): Z ≥ 57, charge 5 and up,
+ * and fewer charges than electrons (from there on the hydrogenic order holds).
+ */
+export function energySearchDomain(z: number, charge: number): boolean {
+  return z >= 57 && charge >= 5 && charge < z - charge
+}
+
 /** Sort order of the removal rule: highest n first, then highest l. */
 export function highestFirst(a: Subshell, b: Subshell): number {
   return b.n - a.n || b.l - a.l

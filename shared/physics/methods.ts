@@ -15,6 +15,7 @@ export type MethodName =
   // the relativistic solver's methods (shared/physics/scf, Dirac–Kohn–Sham)
   | 'dirac-scf-delta'
   | 'dirac-scf-eigenvalue'
+  | 'dirac-scf-delta-qed'
 
 /**
  * Where a method is meant to be used. Outside it the record carries `eV: null` and the reason
@@ -34,6 +35,10 @@ export interface MethodDomain {
   anions: boolean
   /** the Z range the method's data cover */
   zMax: number
+  /** the lowest Z it is meant for (default 1) */
+  zMin?: number
+  /** the electron counts it is meant for (default: any) */
+  electrons?: readonly number[]
 }
 
 export interface MethodInfo {
@@ -53,6 +58,8 @@ const NOT_ONE_ELECTRON =
 export function methodDomainReason(method: MethodInfo, z: number, charge: number, electrons: number): string | null {
   if (electrons === 0) return 'bare nucleus: no electron to remove'
   if (z > method.domain.zMax) return `the method's data cover Z ≤ ${method.domain.zMax}`
+  if (method.domain.electrons && !method.domain.electrons.includes(electrons)) return method.domain.text
+  if (method.domain.zMin !== undefined && z < method.domain.zMin) return `the method's data cover Z ≥ ${method.domain.zMin}`
   if (method.domain.oneElectron === 'only' && electrons !== 1) return 'one-electron ions only'
   if (method.domain.oneElectron === 'never' && electrons === 1 && (z * CODATA_2018.fineStructure) ** 2 / 4 > 1e-4) return NOT_ONE_ELECTRON
   if (charge < 0 && !method.domain.anions) return 'not made for negative ions: its screening was fitted to atoms and positive ions, not to a loosely bound extra electron'
@@ -124,6 +131,15 @@ export const METHODS: readonly MethodInfo[] = [
     citation: 'D. A. Liberman, D. T. Cromer and J. T. Waber, Comput. Phys. Commun. 2, 107 (1971); J. P. Perdew and A. Zunger, Phys. Rev. B 23, 5048 (1981)',
     scf: true,
     domain: { text: 'atoms and positive ions, Z = 1–118, every charge state; relativistic, finite nucleus, no QED', oneElectron: 'any', anions: false, zMax: 118 },
+  },
+  {
+    name: 'dirac-scf-delta-qed',
+    description:
+      'He- and Li-like ions: the relativistic ΔSCF energy (dirac-scf-delta) plus the one-loop self-energy and Uehling vacuum polarisation of every electron, screened by the others, each shown',
+    citation:
+      'self-energy: hydrogenic F(Zα) of V. M. Shabaev, I. I. Tupitsyn and V. A. Yerokhin, Phys. Rev. A 88, 012513 (2013), scaled by the near-nucleus density ⟨e^(−r/ƛ_C)⟩ of each Dirac–Kohn–Sham orbital (the weight of the local part of their model operator); E. A. Uehling, Phys. Rev. 48, 55 (1935), averaged over each orbital',
+    scf: true,
+    domain: { text: 'He- and Li-like ions (two or three electrons), Z = 10–118; relativistic ΔSCF with screened one-loop QED', oneElectron: 'any', anions: false, zMax: 118, zMin: 10, electrons: [2, 3] },
   },
 ]
 

@@ -9,7 +9,7 @@ import { bindingEnergies, type BindingEnergy } from './binding'
 import type { DiracOrbital, DiracRadialDensity, ScfOrbital, ScfRadialDensity, ScfSpeciesEstimates } from './scf/types'
 import type { ConfigurationRule } from './configuration'
 import { CODATA_2018, METHODS, METHOD_NAMES, type MethodName, diracHydrogenLikeEv, nuclearMass } from './methods'
-import { oneElectronEnergy } from './qed/index'
+import { oneElectronEnergy, type QedCorrection } from './qed/index'
 import { formatSpecies, parseSpecies, type ParsedSpecies } from './notation'
 import type { ElectronAffinity, ReferenceGroundLevel, SourcedValue } from './reference'
 import { type Estimate, type TermSummary, judged, round, speciesBase } from './record-parts'
@@ -113,6 +113,23 @@ function selectMethods(methods: string[] | undefined): ReadonlySet<MethodName> {
   return new Set(methods as MethodName[])
 }
 
+const SCREENED_SE_SOURCE =
+  'hydrogenic one-loop self-energy F(Zα) of the same level (Shabaev, Tupitsyn and Yerokhin, Phys. Rev. A 88, 012513 (2013)) scaled by the near-nucleus density ⟨e^(−r/ƛ_C)⟩ of each Dirac–Kohn–Sham orbital against the hydrogenic one'
+const SCREENED_VP_SOURCE = 'E. A. Uehling, Phys. Rev. 48, 55 (1935): the finite nucleus\'s Uehling potential averaged over each Dirac–Kohn–Sham orbital'
+
+/** dirac-scf-delta-qed: the ΔSCF energy with the screened QED of a He- or Li-like ion, and the two corrections. */
+function screenedQed(dirac: ScfSpeciesEstimates['dirac']): { eV: number; corrections: QedCorrection[] } | undefined {
+  const qed = dirac?.screenedQed
+  if (!dirac || !qed || dirac.deltaEv === null) return undefined
+  return {
+    eV: dirac.deltaEv + qed.selfEnergyEv + qed.vacuumPolarisationEv,
+    corrections: [
+      Object.freeze({ name: 'self-energy (screened)', eV: round(qed.selfEnergyEv, 6), source: SCREENED_SE_SOURCE }),
+      Object.freeze({ name: 'vacuum polarisation (Uehling, screened)', eV: round(qed.vacuumPolarisationEv, 6), source: SCREENED_VP_SOURCE }),
+    ],
+  }
+}
+
 function failure(what: string, result: { converged: boolean; failure?: string } | null): string | null {
   if (!result || result.converged) return null
   return `SCF solution for ${what} did not converge${result.failure ? `: ${result.failure}` : ''}`
@@ -152,16 +169,18 @@ export function describeSpecies(input: string | ParsedSpecies, options: Describe
     const dirac = scf.dirac
     for (const info of METHODS) {
       if (!info.scf || !asked(info.name)) continue
-      const relativistic = info.name === 'dirac-scf-delta' || info.name === 'dirac-scf-eigenvalue'
+      const relativistic = info.name === 'dirac-scf-delta' || info.name === 'dirac-scf-eigenvalue' || info.name === 'dirac-scf-delta-qed'
+      const screened = info.name === 'dirac-scf-delta-qed' ? screenedQed(dirac) : undefined
       const value =
         info.name === 'scf-delta' ? scf.deltaEv
         : info.name === 'scf-eigenvalue' ? scf.eigenvalueEv
+        : info.name === 'dirac-scf-delta-qed' ? (dirac ? screened?.eV ?? null : undefined)
         : relativistic ? (dirac ? (info.name === 'dirac-scf-delta' ? dirac.deltaEv : dirac.eigenvalueEv) : undefined)
         : scf.byMethod?.[info.name]
       // a method the caller's SCF results do not cover is left out (not computed), not "not applicable"
       if (value === undefined) continue
       const basis = relativistic && dirac ? dirac.species.method : scf.species.method
-      estimates.push(judged(info.name, species, value, referenceEv, { basis, missing }))
+      estimates.push(judged(info.name, species, value, referenceEv, { basis, missing, corrections: screened?.corrections }))
     }
     if (dirac) {
       for (const note of [failure('this species (relativistic)', dirac.species), failure('the next ion (relativistic)', dirac.next)]) if (note) notes.push(note)

@@ -9,9 +9,10 @@ export interface NuclearRadius {
 }
 
 // rms charge radii of the lightest nuclides, where the empirical formula below does not hold
-// (A < 10), and of a few heavier ones. I. Angeli and K. P. Marinova, At. Data Nucl. Data Tables 99, 69 (2013), Table I —
-// values recalled from memory, not read from the table; at these Z the nuclear-size shift is
-// below 1e−8 of the binding energy, so an error of a few per cent in them cannot show.
+// (A < 10), and of a few heavier ones: I. Angeli and K. P. Marinova, At. Data Nucl. Data Tables
+// 99, 69 (2013), Table I, as the IAEA charge-radii table carries it; every value below read in
+// the copy of that table in the open atomic code ampsci (B. M. Roberts), src/Physics/
+// nuclear_data_table.hpp, and found equal to four decimals.
 const LIGHT: Readonly<Record<string, number>> = {
   '1-1': 0.8783,
   '1-2': 2.1421,
@@ -21,8 +22,8 @@ const LIGHT: Readonly<Record<string, number>> = {
   '3-6': 2.589,
   '3-7': 2.444,
   '4-9': 2.519,
-  // the principal isotopes of elements labs strip to few electrons (same table, same caveat: from
-  // memory); here 1 % in R is 2 % of the nuclear-size shift, about 4 eV at uranium
+  // the principal isotopes of elements labs strip to few electrons (same table); here 1 % in R is
+  // 2 % of the nuclear-size shift, about 4 eV at uranium
   '6-12': 2.4702,
   '8-16': 2.6991,
   '10-20': 3.0055,
@@ -39,7 +40,7 @@ const LIGHT: Readonly<Record<string, number>> = {
   '90-232': 5.7848,
   '92-238': 5.8571,
 }
-const LIGHT_SOURCE = 'I. Angeli and K. P. Marinova, At. Data Nucl. Data Tables 99, 69 (2013) (from memory)'
+const LIGHT_SOURCE = 'I. Angeli and K. P. Marinova, At. Data Nucl. Data Tables 99, 69 (2013)'
 const FORMULA_SOURCE = 'R_rms = 0.836 A^(1/3) + 0.570 fm, W. R. Johnson and G. Soff, At. Data Nucl. Data Tables 33, 405 (1985)'
 
 /**

@@ -4,6 +4,7 @@
  */
 import type { SubshellOccupation } from './channels'
 import { defaultJSplit } from './dirac-channels'
+import { qedEnergy, screenedQedDomain } from './dirac-qed'
 import { DIRAC_METHOD_NAMES, runDirac, type DiracOptions } from './dirac-scf'
 import { toDiracResult } from './dirac-result'
 import { defaultRMax } from './scf'
@@ -40,5 +41,18 @@ export function diracSpeciesEstimates(
       }
   const deltaEv = nextRun && run.converged && nextRun.converged ? (nextRun.totalEnergy - run.totalEnergy) * HARTREE_EV : null
   const top = run.converged && run.solutions.length > 0 ? Math.max(...run.solutions.map((s) => s.energy)) : null
-  return { species, next, deltaEv, eigenvalueEv: top === null ? null : -top * HARTREE_EV }
+  const out: DiracSpeciesEstimates = { species, next, deltaEv, eigenvalueEv: top === null ? null : -top * HARTREE_EV }
+  // the finite nucleus is in the ΔSCF already; a He- or Li-like ion also gets its screened QED
+  const electrons = own.reduce((sum, s) => sum + s.electrons, 0)
+  if (deltaEv !== null && nextRun && options.nucleus !== 'point' && screenedQedDomain(z, electrons)) {
+    const mine = qedEnergy(run)
+    const theirs = qedEnergy(nextRun)
+    if (mine && theirs) {
+      out.screenedQed = {
+        selfEnergyEv: (theirs.selfEnergyHartree - mine.selfEnergyHartree) * HARTREE_EV,
+        vacuumPolarisationEv: (theirs.vacuumPolarisationHartree - mine.vacuumPolarisationHartree) * HARTREE_EV,
+      }
+    }
+  }
+  return out
 }

@@ -111,4 +111,9 @@ export interface DiracSpeciesEstimates {
   next: DiracResult | null
   deltaEv: number | null
   eigenvalueEv: number | null
+  /**
+   * He- and Li-like ions (dirac-qed.ts): the screened one-loop QED, as its change of the
+   * ionisation energy in eV (negative: it lowers it); absent elsewhere and in older cache rows
+   */
+  screenedQed?: { selfEnergyEv: number; vacuumPolarisationEv: number }
 }

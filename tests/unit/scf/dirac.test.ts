@@ -55,7 +55,7 @@ describe('radial Dirac equation, point nucleus: the exact hydrogen-like energies
 })
 
 describe('finite nucleus', () => {
-  it('rms radius by the Johnson–Soff formula: 238U 5.75 fm (measured 5.857 fm, Angeli and Marinova 2013, from memory)', () => {
+  it('rms radius by the Johnson–Soff formula: 238U 5.75 fm (measured 5.857 fm, Angeli and Marinova 2013, as read in the IAEA table copied by the open code ampsci)', () => {
     expect(rmsRadiusFm(238)).toBeCloseTo(0.836 * Math.cbrt(238) + 0.57, 12)
     expect(Math.abs(rmsRadiusFm(238) / 5.857 - 1)).toBeLessThan(0.02)
   })
