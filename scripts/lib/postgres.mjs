@@ -81,12 +81,17 @@ function loadCredentials(dir) {
   return credentials
 }
 
-/** Trust lines of pg_hba.conf (from clusters made before passwords were required) become scram-sha-256. */
+/**
+ * Turns the trust rules of pg_hba.conf (clusters made before passwords were required) into
+ * scram-sha-256; true when there were any.
+ */
 function requirePasswords(data) {
   const hba = path.join(data, 'pg_hba.conf')
   const text = readFileSync(hba, 'utf8')
-  const lines = text.split('\n').map((line) => (/^\s*#/.test(line) ? line : line.replace(/\btrust\s*$/, 'scram-sha-256')))
-  const changed = lines.join('\n')
+  const changed = text
+    .split('\n')
+    .map((line) => (/^\s*#/.test(line) ? line : line.replace(/\btrust\s*$/, 'scram-sha-256')))
+    .join('\n')
   if (changed === text) return false
   writeFileSync(hba, changed) // an existing file keeps its owner (postgres) and mode
   return true
@@ -121,11 +126,11 @@ export function startPostgres({ dir, port }) {
   const psql = (sql, database = 'postgres') =>
     // the SQL goes in on stdin, so no password set here shows in the process list
     run(path.join(bin, 'psql'), ['-h', '127.0.0.1', '-p', String(port), '-U', 'postgres', '-d', database, '-v', 'ON_ERROR_STOP=1', '-qAt', '-f', '-'], { quiet: true, env: psqlEnv, input: sql })
-  // A cluster made before passwords were required: give the superuser its password while the old
-  // rule still lets us in, then require passwords from now on.
-  if (readFileSync(path.join(data, 'pg_hba.conf'), 'utf8').split('\n').some((l) => !/^\s*#/.test(l) && /\btrust\s*$/.test(l))) {
+  // A cluster made before passwords were required: the running server still reads the old trust
+  // rules until it reloads, so the superuser gets its password first, then the rules change.
+  if (requirePasswords(data)) {
     psql(`alter role postgres password '${credentials.postgres}'`)
-    if (requirePasswords(data)) pgCtl('reload')
+    pgCtl('reload')
   }
   const handle = {
     bin,
