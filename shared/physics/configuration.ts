@@ -7,7 +7,7 @@
  * highest l (so 4s before 3d, 6s before 4f) — first from the valence subshells, those outside the
  * neutral atom's closed-shell core, and only then from the core in the same order. The proviso is
  * ours: without it Nd³⁺ would lose a 5p electron ahead of 4f and come out 4f4 5p5 instead of the
- * 4f3 that NIST ASD gives (Nd IV 4I9/2, from memory), and U³⁺ would lose 6p before 5f. A curated
+ * 4f3 that NIST ASD gives (Nd IV 4I°9/2, data/nist-asd-detail.ts), and U³⁺ would lose 6p before 5f. A curated
  * table of ions whose NIST ground configuration departs from the rule overrides it.
  *
  * Heavy ions (Z ≥ 57, charge 5 and up, fewer charges than electrons): 4f (5f) competes with
@@ -15,7 +15,8 @@
  * in NIST ASD, not the rule's 4d10 5s2 5p; tungsten ions lose 4f before 5s from W¹³⁺ on). There the
  * ground configuration is the one of lowest Dirac–Kohn–Sham total energy among those that share
  * the electrons among the outer subshells (scf/configuration-search.ts), computed once and
- * tabulated in data/dks-configurations.ts where it is not the rule's.
+ * tabulated in data/dks-configurations.ts where it is not the rule's. The table of data/irregular.ts
+ * overrides the search too, where NIST ASD's ground shells rest on spectra (W⁷⁺, W¹¹⁺, W¹⁶⁺).
  *
  * Highly charged ions: once the charge is at least the number of electrons left (Z ≥ 2N) the
  * nuclear field dominates and the levels follow the hydrogenic order, n first and then l

@@ -13,9 +13,9 @@ const HYDROGENIC_ORDER: readonly (readonly [number, number])[] = [1, 2, 3, 4, 5,
 const NEUTRALS = new Map(IRREGULAR_NEUTRALS.map((e) => [e.z, e]))
 
 // From tungsten on, the closed 4f shell lies below 5s and 5p in the ions, so it joins the core:
-// otherwise Ag-like W²⁷⁺ would come out 4d10 5s instead of its 4d10 4f (2F°5/2, from memory of
-// the tungsten spectroscopy done for fusion plasmas). Before tungsten the closed 4f still gives
-// up electrons first (Yb³⁺ is 4f13, NIST Yb IV, from memory). 5f joins the core from Z = 106 on
+// otherwise Ag-like W²⁷⁺ would come out 4d10 5s instead of its 4d10 4f (2F°5/2 in NIST ASD 5.12's
+// ground states, data/nist-asd-detail.ts). Before tungsten the closed 4f still gives up electrons
+// first (Yb³⁺ is 4f13, 2F°7/2 there). 5f joins the core from Z = 106 on
 // by analogy, with no data to check it against.
 function neutralCore(z: number, neutral: readonly Subshell[]): Subshell[] {
   const core = [...(largestCore(neutral)?.subshells ?? [])]

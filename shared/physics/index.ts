@@ -21,15 +21,17 @@ export type { ScreeningRow } from './slater'
 export { slaterScreening, screeningConstant, nStar } from './slater'
 export type { MethodInfo, MethodName, MethodDomain, NuclearMass } from './methods'
 export { METHODS, METHOD_NAMES, methodDomainReason, CODATA_2018, SLATER_RYDBERG_EV, diracHydrogenLikeEv, nuclearMass } from './methods'
-export type { SourcedValue, ElectronAffinity, ReferenceGroundLevel } from './reference'
+export type { SourcedValue, ReferenceValue, ReferenceKind, ElectronAffinity, ReferenceGroundLevel, ReferenceIonisationDetail } from './reference'
 export {
   IONISATION_SOURCE,
   electronAffinity,
   referenceIonisationEv,
   referenceIonisationSeries,
   referenceGroundLevel,
+  referenceIonisationDetail,
+  referenceGroundShells,
 } from './reference'
-export type { BindingEnergy, DescribeOptions, DiracSummary, Estimate, ScreeningEntry, SpeciesRecord, TermSummary } from './record'
+export type { BindingEnergy, DescribeOptions, DiracSummary, Estimate, ReferenceConfiguration, ScreeningEntry, SpeciesRecord, TermSummary } from './record'
 export type { ScfSpeciesEstimates } from './scf/types'
 export { describeSpecies } from './record'
 export type { BestEstimate, SpeciesClass } from './best-estimate'

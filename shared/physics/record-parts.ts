@@ -10,12 +10,18 @@ import { METHODS, SLATER_RYDBERG_EV, hydrogenicEv, methodDomainReason, type Meth
 import type { QedCorrection } from './qed/index'
 import { formatSpecies } from './notation'
 import {
+  IONISATION_DETAIL_SOURCE,
   IONISATION_SOURCE,
   type ElectronAffinity,
   type ReferenceGroundLevel,
+  type ReferenceValue,
   type SourcedValue,
   electronAffinity,
+  groundShellOccupations,
   referenceGroundLevel,
+  referenceGroundShells,
+  referenceIonGroundLevel,
+  referenceIonisationDetail,
   referenceIonisationEv,
 } from './reference'
 import { slaterScreening, type ScreeningRow } from './slater'
@@ -52,7 +58,7 @@ export interface SpeciesBase {
   term: string | null
   isoelectronic: string | null
   screening: readonly ScreeningRow[]
-  reference: Readonly<SourcedValue> | null
+  reference: Readonly<ReferenceValue> | null
   nextElectron: string | null
   slaterHydrogenic: Estimate | null
   slaterTotalEnergy: Estimate | null
@@ -66,9 +72,33 @@ export interface SpeciesBase {
   orbitals: readonly SubshellBoxes[]
   terms: readonly TermSummary[]
   referenceGroundLevel: Readonly<ReferenceGroundLevel> | undefined
+  referenceConfiguration: Readonly<ReferenceConfiguration> | undefined
   electronAffinity: Readonly<ElectronAffinity> | undefined
   notations: Readonly<{ ionic: string; spectroscopic: string }>
   caution: string
+}
+
+/** An ion's ground shells as NIST ASD lists them, set beside the engine's configuration. */
+export interface ReferenceConfiguration {
+  /** as ASD writes them with '.' → ' ', e.g. '[Cd] 4f11' */
+  configuration: string
+  /** ASD's ground level, e.g. '4I°15/2'; absent where it gives none */
+  level?: string
+  /** whether the engine's configuration has the same occupations */
+  matches: boolean
+  source: string
+}
+
+/** ASD's ground shells of a positive ion beside the engine's configuration; undefined where ASD lists none. */
+function referenceConfigurationOf(z: number, charge: number, subshells: readonly Subshell[]): ReferenceConfiguration | undefined {
+  if (charge < 1) return undefined
+  const shells = referenceGroundShells(z, charge)
+  const theirs = shells === null ? null : groundShellOccupations(shells)
+  if (shells === null || theirs === null) return undefined
+  const ours = new Map(subshells.filter((s) => s.electrons > 0).map((s) => [subshellLabel(s.n, s.l), s.electrons]))
+  const matches = ours.size === theirs.size && [...ours].every(([label, n]) => theirs.get(label) === n)
+  const level = referenceIonGroundLevel(z, charge)
+  return { configuration: shells.replace(/\./g, ' '), ...(level ? { level } : {}), matches, source: IONISATION_DETAIL_SOURCE }
 }
 
 const CAUTION = 'Computed values are model estimates, not measurements; where a reference value is given, rely on it.'
@@ -163,8 +193,16 @@ function compute(z: number, charge: number): SpeciesBase {
   const next = nextElectronSubshell(z, charge)
   const ea = charge === -1 ? Object.freeze(electronAffinity(z)) : undefined
   const referenceEv = charge === -1 ? (ea?.bound ? ea.eV : null) : referenceIonisationEv(z, charge)
-  const reference =
-    referenceEv === null ? null : Object.freeze({ eV: referenceEv, source: ea?.source ?? IONISATION_SOURCE })
+  const detail = charge >= 0 && referenceEv !== null ? referenceIonisationDetail(z, charge) : null
+  const reference: ReferenceValue | null =
+    referenceEv === null
+      ? null
+      : Object.freeze({
+          eV: referenceEv,
+          source: ea?.source ?? IONISATION_SOURCE,
+          ...(detail?.uncertaintyEv != null ? { uncertaintyEv: detail.uncertaintyEv } : {}),
+          ...(detail?.kind ? { kind: detail.kind } : {}),
+        })
   const own = slater(z, charge)
   let slaterHydrogenic: Estimate | null = null
   let slaterTotalEnergy: Estimate | null = null
@@ -209,6 +247,7 @@ function compute(z: number, charge: number): SpeciesBase {
     orbitals: Object.freeze(orbitalBoxes(shells)),
     terms: termSummary(shells),
     referenceGroundLevel: level ? Object.freeze(level) : undefined,
+    referenceConfiguration: Object.freeze(referenceConfigurationOf(z, charge, shells)),
     electronAffinity: ea,
     notations: Object.freeze(formatSpecies(z, charge)),
     caution: charge === -1 ? CAUTION + ANION_CAUTION : CAUTION,

@@ -23,6 +23,10 @@ export function formatRecord(r: SpeciesRecord): string {
     const how = r.termRule === 'table' ? `from ${r.termSource}` : "Hund's rules"
     lines.push(`  ground term           ${r.term ?? '—'}   (${how}); ${r.unpaired} unpaired`)
     if (r.configurationSource) lines.push(`  configuration from    ${r.configurationSource}`)
+    if (r.referenceConfiguration) {
+      const ref = r.referenceConfiguration
+      lines.push(`  NIST ground shells    ${ref.configuration}${ref.level ? ` ${ref.level}` : ''}${ref.matches ? ' (same as the engine\'s)' : ' (differs from the engine\'s)'}`)
+    }
     if (r.referenceGroundLevel) {
       const ref = r.referenceGroundLevel
       lines.push(`  NIST ground level     ${ref.configuration ?? '—'} ${ref.level ?? ''}${ref.tentative ? ' (tentative)' : ''}`.trimEnd())
@@ -48,7 +52,11 @@ export function formatRecord(r: SpeciesRecord): string {
   if (r.electrons > 0) {
     lines.push(`  ionisation energy (next electron from ${ie.nextElectron})`)
     const rows: string[][] = []
-    if (ie.reference) rows.push(['reference', `${eV(ie.reference.eV)} eV`, '', ie.reference.source])
+    if (ie.reference) {
+      const u = ie.reference.uncertaintyEv === undefined ? "" : ` ± ${ie.reference.uncertaintyEv}`
+      const kind = ie.reference.kind ? `; ${ie.reference.kind}` : ''
+      rows.push(["reference", `${eV(ie.reference.eV)} eV${u}`, '', `${ie.reference.source}${kind}`])
+    }
     else rows.push(['reference', '—', '', r.electronAffinity && 'statement' in r.electronAffinity ? r.electronAffinity.statement : 'no reference value'])
     for (const e of ie.estimates) {
       if (e.eV === null) {

@@ -11,14 +11,14 @@ import type { ConfigurationRule } from './configuration'
 import { CODATA_2018, METHODS, METHOD_NAMES, type MethodName, diracHydrogenLikeEv, nuclearMass } from './methods'
 import { oneElectronEnergy, type QedCorrection } from './qed/index'
 import { formatSpecies, parseSpecies, type ParsedSpecies } from './notation'
-import type { ElectronAffinity, ReferenceGroundLevel, SourcedValue } from './reference'
-import { type Estimate, type TermSummary, judged, round, speciesBase } from './record-parts'
+import type { ElectronAffinity, ReferenceGroundLevel, ReferenceValue, SourcedValue } from './reference'
+import { type Estimate, type ReferenceConfiguration, type TermSummary, judged, round, speciesBase } from './record-parts'
 import type { ScreeningRow } from './slater'
 import { subshellLabel } from './subshells'
 import type { SubshellBoxes } from './terms'
 import { ENGINE_VERSION } from './version'
 
-export type { Estimate, TermSummary } from './record-parts'
+export type { Estimate, ReferenceConfiguration, TermSummary } from './record-parts'
 export type { BindingEnergy } from './binding'
 
 export interface DescribeOptions {
@@ -63,7 +63,7 @@ export interface SpeciesRecord {
   isoelectronic: string | null
   screening: readonly ScreeningEntry[]
   ionisationEnergy: {
-    reference: Readonly<SourcedValue> | null
+    reference: Readonly<ReferenceValue> | null
     estimates: readonly Estimate[]
     /** the subshell the next electron leaves ('3p'), null for a bare nucleus */
     nextElectron: string | null
@@ -84,6 +84,8 @@ export interface SpeciesRecord {
   terms: readonly TermSummary[]
   /** neutral atoms: NIST's ground configuration and level, to set beside the engine's */
   referenceGroundLevel?: Readonly<ReferenceGroundLevel>
+  /** positive ions: NIST ASD's ground shells, to set beside the engine's configuration */
+  referenceConfiguration?: Readonly<ReferenceConfiguration>
   /** anions: the electron affinity is the binding energy of the extra electron */
   electronAffinity?: Readonly<ElectronAffinity>
   productionThresholdNote?: string
@@ -222,6 +224,7 @@ export function describeSpecies(input: string | ParsedSpecies, options: Describe
     bestEstimate: bestEstimate(z, charge, estimates),
   }
   if (base.referenceGroundLevel) record.referenceGroundLevel = base.referenceGroundLevel
+  if (base.referenceConfiguration) record.referenceConfiguration = base.referenceConfiguration
   if (base.electronAffinity) record.electronAffinity = base.electronAffinity
   if (base.productionThresholdNote) record.productionThresholdNote = base.productionThresholdNote
   if (scf) {

@@ -144,4 +144,22 @@ describe('heavy highly charged ions', () => {
     const { best } = await lookUp('Yb21+', 'species-yb21')
     expect(Math.abs(bestEv(best) / 580 - 1)).toBeLessThan(0.03)
   })
+
+  // NIST ASD 5.12 (ground states and ionization energies export): Yb XII [Cd] 4f11 4I°15/2,
+  // (244) ± 12 eV, a theoretical value; W XVI [Cd] 4f11, [361.9] ± 1.5 eV, semi-empirical.
+  it('Yb11+ shows the reference\'s stated uncertainty and ASD\'s ground shells beside the engine\'s', async () => {
+    const context = await newContext(browser)
+    const page = await context.newPage()
+    await signInAs(page, 'scientist')
+    await page.goto('/species?q=' + encodeURIComponent('Yb11+'))
+    await page.getByTestId('species-result').waitFor()
+    await expect(page.getByTestId('reference-uncertainty').innerText()).resolves.toMatch(/Theoretical value, stated uncertainty ±12 eV \(4\.9 %\)\. Deviations smaller than that do not tell the methods apart\./)
+    await expect(page.getByTestId('reference-configuration').innerText()).resolves.toMatch(/NIST ASD lists \[Cd\] 4f11 \(4I°15\/2\) as the ground shells of this ion; the engine's configuration differs/)
+    await snap(page, 'species-yb11-reference')
+    await page.goto('/species?q=' + encodeURIComponent('W15+'))
+    await page.getByTestId('species-result').waitFor()
+    await expect(page.getByTestId('reference-uncertainty').innerText()).resolves.toMatch(/Semi-empirical value, stated uncertainty ±1\.5 eV \(0\.41 %\)\.$/)
+    await expect(page.getByTestId('reference-configuration').innerText()).resolves.toMatch(/NIST ASD lists the same ground shells \(\[Cd\] 4f11, level 4I°15\/2\)/)
+    await context.close()
+  })
 })

@@ -1,9 +1,10 @@
 /**
  * Ground configurations and terms that the filling rules do not give, with where each comes from.
  *
- * No package holds ground configurations of ions. Ion entries below are NIST ASD ground levels
- * recalled rather than read: every one is marked "from memory" and should be re-read against
- * https://physics.nist.gov/asd (Levels, ground level of the spectrum) before being relied on.
+ * No package holds ground configurations of ions. The ion entries below are the ground shells
+ * (and, in the comments, ground levels) of NIST ASD 5.12's "Ground States and Ionization Energies"
+ * table, read in its export (data/nist-asd-detail.ts carries the ground shells of every ion; the
+ * test tests/unit/physics/reference-detail.test.ts checks each entry here against it).
  */
 
 export interface ConfigurationEntry {
@@ -14,7 +15,7 @@ export interface ConfigurationEntry {
 }
 
 const NIST_VIA_PYMATGEN = "NIST ASD via pymatgen periodic_table.json 'Electronic structure'"
-const NIST_FROM_MEMORY = 'NIST ASD ground level (from memory)'
+const NIST_ASD_GROUND_SHELLS = 'NIST ASD 5.12 ground shells (ground states and ionization energies)'
 
 /**
  * Neutral atoms whose NIST ASD ground configuration is not the Madelung one: every such Z in
@@ -45,8 +46,16 @@ export const IRREGULAR_NEUTRALS: readonly ConfigurationEntry[] = [
 ].map(([z, configuration]) => ({ z: z as number, charge: 0, configuration: configuration as string, source: NIST_VIA_PYMATGEN }))
 
 /**
- * Singly to triply charged ions whose NIST ASD ground configuration departs from the removal
- * rule of configuration.ts (valence electrons leave highest n first, within n highest l).
+ * Ions whose NIST ASD ground shells depart from the removal rule of configuration.ts (valence
+ * electrons leave highest n first, within n highest l) or from the engine's energy search, where
+ * ASD's ionisation energy of the ion is measured or semi-empirical, i.e. where the ground level
+ * rests on spectra. Where ASD's value is theoretical the engine keeps its own choice and the
+ * species record sets ASD's ground shells beside it (referenceConfiguration). Taking ASD's
+ * calculated ground shells too was tried and not kept: for Es⁸⁺–Lr¹²⁺ ([Rn] 5f^n, values stated
+ * to 1.2–1.6 %) it brought the ΔSCF from 5–11 % low to within 4 %, but the next ion, whose ASD
+ * shells change type ([Hg] 5f^k 6p^m), then came out 22–36 % low: the local-density total
+ * energies misplace 5f against 6p by tens of eV, so a ΔSCF across a change of configuration
+ * type inherits that error, while the engine's own choices keep it spread evenly.
  */
 export const IRREGULAR_IONS: readonly ConfigurationEntry[] = [
   [23, 1, '[Ar] 3d4'], // V II 5D0
@@ -67,11 +76,18 @@ export const IRREGULAR_IONS: readonly ConfigurationEntry[] = [
   [92, 1, '[Rn] 5f3 7s2'], // U II 4I°9/2
   [92, 2, '[Rn] 5f4'], // U III 5I4
   [96, 1, '[Rn] 5f7 7s2'], // Cm II 8S°7/2
+  // added from the ASD export (engine 1.3.0): ASD's value measured or semi-empirical, rule or search differs
+  [74, 7, '[Kr] 4d10 4f13 5s2 5p6'], // W VIII 2F°7/2 (the search gave 4f14 5p5)
+  [74, 11, '[Kr] 4d10 4f13 5s2 5p2'], // W XII 4F°7/2 (the search gave 4f14 5p1)
+  [74, 16, '[Kr] 4d10 4f11 5s1'], // W XVII 5I°8 (the search gave 4f10 5s2)
+  [90, 1, '[Rn] 6d1 7s2'], // Th II 2D3/2
+  [93, 2, '[Rn] 5f5'], // Np III 6H°5/2
+  [96, 2, '[Rn] 5f8'], // Cm III 7F6
 ].map(([z, charge, configuration]) => ({
   z: z as number,
   charge: charge as number,
   configuration: configuration as string,
-  source: NIST_FROM_MEMORY,
+  source: NIST_ASD_GROUND_SHELLS,
 }))
 
 /**
@@ -112,7 +128,7 @@ export interface TermEntry {
  */
 export const NON_HUND_TERMS: readonly TermEntry[] = [
   { z: 58, charge: 0, term: '1G°4', source: "NIST ASD via pymatgen periodic_table.json 'Ground level'" },
-  { z: 58, charge: 1, term: '4H°7/2', source: NIST_FROM_MEMORY },
+  { z: 58, charge: 1, term: '4H°7/2', source: 'NIST ASD 5.12 ground level (ground states and ionization energies)' },
   { z: 21, charge: -1, term: '1D°2', source: 'photodetachment studies (from memory)' },
   { z: 39, charge: -1, term: '1D°2', source: 'photodetachment studies (from memory)' },
 ]

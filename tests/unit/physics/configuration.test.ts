@@ -3,6 +3,21 @@ import { groundConfiguration, removalRuleConfiguration } from '../../../shared/p
 import { formatConfiguration } from '../../../shared/physics/subshells'
 import { groundTerm } from '../../../shared/physics/terms'
 import { expandFixtureConfiguration, PYMATGEN } from './fixtures'
+import { NIST_ASD_DETAIL } from '../../../shared/physics/data/nist-asd-detail'
+import { groundShellOccupations } from '../../../shared/physics/reference'
+import type { Subshell } from '../../../shared/physics/subshells'
+
+// NIST ASD 5.12's ground shells and level of an ion (data/nist-asd-detail.ts, read in ASD's
+// "Ground States and Ionization Energies" export), to check the rows below against.
+const occupations = (subshells: readonly Subshell[]) => Object.fromEntries(subshells.map((s) => [`${s.n}${'spdfg'[s.l]}`, s.electrons]))
+function expectAsd(z: number, charge: number, subshells: readonly Subshell[], term: string) {
+  const d = NIST_ASD_DETAIL[z - 1][charge]!
+  expect(occupations(subshells), `ASD ground shells ${d[2]}`).toEqual(Object.fromEntries(groundShellOccupations(d[2])!))
+  if (d[4] === '' || d[4] === '°') return
+  // a jj-coupled label such as (9/2,1/2)°4 is compared by parity and J, the LS term's equivalents
+  if (d[4].startsWith('(')) expect(term.replace(/^\d+[A-Z]/, ''), `ASD ground level ${d[4]}`).toBe(d[4].slice(d[4].lastIndexOf(')') + 1))
+  else expect(term, `ASD ground level ${d[4]}`).toBe(d[4])
+}
 
 describe('neutral atoms against NIST ASD (python3-pymatgen 2022.11.7, periodic_table.json)', () => {
   // Every Z the file gives a configuration for (1–103); no exceptions are needed.
@@ -26,9 +41,10 @@ describe('neutral atoms beyond the reference data follow Madelung', () => {
   })
 })
 
-// NIST ASD ground levels of the spectra named, all from memory (no package holds ion
-// configurations); the irregular ones are the ions of data/irregular.ts.
-describe('ions against NIST ASD ground levels (from memory)', () => {
+// NIST ASD ground levels of the spectra named, first written from memory and now each checked
+// against ASD 5.12's ground shells and level (expectAsd); the irregular ones are the ions of
+// data/irregular.ts. Th II was remembered as 6d2 7s 4F3/2; ASD lists 6d 7s2 2D3/2.
+describe('ions against NIST ASD 5.12 ground levels', () => {
   it.each([
     [20, 1, '[Ar] 4s1', '2S1/2', 'Ca II'],
     [21, 1, '[Ar] 3d1 4s1', '3D1', 'Sc II'],
@@ -77,7 +93,7 @@ describe('ions against NIST ASD ground levels (from memory)', () => {
     [80, 1, '[Xe] 4f14 5d10 6s1', '2S1/2', 'Hg II'],
     [81, 1, '[Xe] 4f14 5d10 6s2', '1S0', 'Tl II'],
     [89, 1, '[Rn] 7s2', '1S0', 'Ac II'],
-    [90, 1, '[Rn] 6d2 7s1', '4F3/2', 'Th II'],
+    [90, 1, '[Rn] 6d1 7s2', '2D3/2', 'Th II'],
     [90, 2, '[Rn] 5f1 6d1', '3H°4', 'Th III'],
     [90, 3, '[Rn] 5f1', '2F°5/2', 'Th IV'],
     [92, 1, '[Rn] 5f3 7s2', '4I°9/2', 'U II'],
@@ -90,11 +106,12 @@ describe('ions against NIST ASD ground levels (from memory)', () => {
     const g = groundConfiguration(z, charge)
     expect(g.core).toBe(core)
     expect(groundTerm(g.subshells, z, charge)?.level).toBe(term)
+    expectAsd(z, charge, g.subshells, term)
   })
 })
 
-// Highly charged ions as known from laboratory and solar spectroscopy (from memory; Fe XIV is
-// DESIGN §5's own example).
+// Highly charged ions as known from laboratory and solar spectroscopy (Fe XIV is DESIGN §5's own
+// example), each checked against ASD 5.12's ground shells and level.
 describe('highly charged ions and their isoelectronic sequence', () => {
   it.each([
     ['Fe XIV', 26, 13, '[Ne] 3s2 3p1', '2P°1/2', 'Al-like'],
@@ -117,6 +134,7 @@ describe('highly charged ions and their isoelectronic sequence', () => {
     expect(g.core).toBe(core)
     expect(g.isoelectronic).toBe(sequence)
     expect(groundTerm(g.subshells, z, charge)?.level).toBe(term)
+    expectAsd(z, charge, g.subshells, term)
   })
 
   // For N ≤ 18 every ion keeps the configuration of the isoelectronic neutral atom (common
@@ -127,12 +145,19 @@ describe('highly charged ions and their isoelectronic sequence', () => {
   })
 
   // K- and Ca-like sequences switch from 4s to 3d after the first ion: Ca II 4s, Sc III 3d,
-  // Sc II 3d 4s, Ti III 3d2 (NIST ASD ground levels, from memory).
+  // Sc II 3d 4s, Ti III 3d2 (NIST ASD 5.12 ground levels; every ion of both sequences to Z = 103
+  // is checked against ASD's ground shells below).
   it('K- and Ca-like ions put the outer electrons in 3d from two charges on', () => {
     expect(groundConfiguration(20, 1).core).toBe('[Ar] 4s1')
     expect(groundConfiguration(21, 1).core).toBe('[Ar] 3d1 4s1')
     for (let z = 21; z <= 118; z++) expect(groundConfiguration(z, z - 19).core).toBe('[Ar] 3d1')
     for (let z = 22; z <= 118; z++) expect(groundConfiguration(z, z - 20).core).toBe('[Ar] 3d2')
+    for (let z = 21; z <= 103; z++) {
+      for (const n of [19, 20]) {
+        const d = NIST_ASD_DETAIL[z - 1][z - n]!
+        expect(occupations(groundConfiguration(z, z - n).subshells), `${z}:${z - n}`).toEqual(Object.fromEntries(groundShellOccupations(d[2])!))
+      }
+    }
   })
 
   // Once the charge is at least the number of electrons the levels follow the hydrogenic order,
