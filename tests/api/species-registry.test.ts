@@ -130,15 +130,17 @@ describe('the recorded-species list', () => {
     expect(csv.headers.get('content-type')).toMatch(/text\/csv/)
     const [header, ...lines] = parse(csv.body as string) as string[][]
     const ar = lines.find((l) => l[0] === 'Ar8+')!
-    expect(header!.join(',')).toBe('species,spectroscopic,z,charge,mass_number,isoelectronic,configuration,term,reference_eV,reference_source,best_estimate_eV,best_estimate_method,samples,engine,recorded_at')
-    // Ar IX (Ar8+): 422.6 eV as carried in shared/physics/data (NIST ASD via Debian python3-pymatgen).
+    expect(header!.join(',')).toBe('species,spectroscopic,z,charge,mass_number,isoelectronic,configuration,term,reference_eV,reference_uncertainty_eV,reference_source,best_estimate_eV,best_estimate_method,samples,engine,recorded_at')
+    // Ar IX (Ar8+): 422.6 eV as carried in shared/physics/data (NIST ASD via Debian python3-pymatgen),
+    // stated to ± 0.06 eV in NIST ASD 5.12 ("18,+8,1s2.2s2.2p6,1S0,[422.60],0.06" in its export)
     expect(ar[6]).toBe('1s2 2s2 2p6')
     expect(ar[7]).toMatch(/^1S/)
     expect(Number(ar[8])).toBeCloseTo(422.6, 1)
-    expect(ar[9]).toMatch(/NIST ASD/)
+    expect(Number(ar[9])).toBe(0.06)
+    expect(ar[10]).toMatch(/NIST ASD/)
     // the record's best estimate: a positive model value near the reference, with the method named
-    expect(Math.abs(Number(ar[10]) - 422.6) / 422.6).toBeLessThan(0.25)
-    expect(ar[11]).toMatch(/^(dirac-scf-eigenvalue|dirac-scf-delta|scf-eigenvalue|scf-delta|slater-total-energy)$/)
+    expect(Math.abs(Number(ar[11]) - 422.6) / 422.6).toBeLessThan(0.25)
+    expect(ar[12]).toMatch(/^(dirac-scf-eigenvalue|dirac-scf-delta|scf-eigenvalue|scf-delta|slater-total-energy)$/)
   })
 })
 
@@ -176,8 +178,10 @@ describe('comparing species', () => {
     expect((await c.scientist.get('/api/species/compare?element=Fe&from=20&to=30')).status).toBe(400)
     const csv = await c.scientist.get('/api/species/compare?element=Fe&from=0&to=2&format=csv')
     const lines = (csv.body as string).trim().split('\n')
-    expect(lines[0]).toMatch(/^species,spectroscopic,z,charge,configuration,term,isoelectronic,reference_eV,slater-hydrogenic_eV/)
+    expect(lines[0]).toMatch(/^species,spectroscopic,z,charge,configuration,term,isoelectronic,reference_eV,reference_uncertainty_eV,slater-hydrogenic_eV/)
     expect(lines).toHaveLength(4)
+    // Fe I 7.9024681 ± 0.0000012 eV (NIST ASD 5.12 export: "26,0,[Ar].3d6.4s2,5D<4>,7.9024681,0.0000012")
+    expect(lines[1]).toMatch(/^Fe,Fe I,26,0,[^,]*,[^,]*,[^,]*,7\.9024681,0\.0000012,/)
   })
 })
 

@@ -59,7 +59,7 @@ export default defineEventHandler(async (event) => {
     // a method that does not apply gives no number; the reason goes beside it
     const notApplicable = Object.fromEntries(r.ionisationEnergy.estimates.flatMap((e) => (e.notApplicable ? [[e.method, e.notApplicable]] : []))) as Record<string, string>
     const best = r.bestEstimate ? { method: r.bestEstimate.method, eV: r.bestEstimate.eV, typicalPercent: r.bestEstimate.typicalPercent } : null
-    rows.push({ label: r.notations.ionic, spectroscopic: r.notations.spectroscopic, z: r.z, charge: r.charge, core: r.core, term: r.term, isoelectronic: r.isoelectronic, reference: r.ionisationEnergy.reference?.eV ?? null, best, estimates, notApplicable, productionThreshold: r.productionThreshold?.eV ?? null })
+    rows.push({ label: r.notations.ionic, spectroscopic: r.notations.spectroscopic, z: r.z, charge: r.charge, core: r.core, term: r.term, isoelectronic: r.isoelectronic, reference: r.ionisationEnergy.reference?.eV ?? null, referenceUncertainty: r.ionisationEnergy.reference?.uncertaintyEv ?? null, best, estimates, notApplicable, productionThreshold: r.productionThreshold?.eV ?? null })
   }
 
   if (query.format === 'csv') {
@@ -67,7 +67,7 @@ export default defineEventHandler(async (event) => {
     setResponseHeader(event, 'Content-Disposition', 'attachment; filename="ionfolio-species-comparison.csv"')
     return stringify(
       rows.map((r) => [
-        r.label, r.spectroscopic, r.z, r.charge, r.core, r.term ?? '', r.isoelectronic ?? '', r.reference ?? '',
+        r.label, r.spectroscopic, r.z, r.charge, r.core, r.term ?? '', r.isoelectronic ?? '', r.reference ?? '', r.referenceUncertainty ?? '',
         ...METHOD_NAMES.map((m) => r.estimates[m] ?? ''),
         r.best?.eV ?? '', r.best?.method ?? '', r.best?.typicalPercent ?? '',
         Object.entries(r.notApplicable).map(([m, why]) => `${m}: ${why}`).join('; '),
@@ -77,7 +77,7 @@ export default defineEventHandler(async (event) => {
         ...GUARDED_CSV,
         header: true,
         columns: [
-          'species', 'spectroscopic', 'z', 'charge', 'configuration', 'term', 'isoelectronic', 'reference_eV',
+          'species', 'spectroscopic', 'z', 'charge', 'configuration', 'term', 'isoelectronic', 'reference_eV', 'reference_uncertainty_eV',
           ...METHOD_NAMES.map((m) => `${m}_eV`),
           'best_estimate_eV', 'best_estimate_method', 'best_estimate_typical_percent', 'not_applicable', 'production_threshold_eV',
         ],

@@ -60,9 +60,9 @@ export default defineEventHandler(async (event) => {
     return stringify(
       rows.map((r: any) => {
         const p = speciesCsvPhysics(r.record)
-        return [r.label, r.spectroscopic, r.z, r.charge, r.mass_number ?? '', r.isoelectronic ?? '', p.configuration, p.term, p.referenceEv, p.referenceSource, p.bestEv, p.bestMethod, r.samples, r.engine ?? '', new Date(r.created_at).toISOString()]
+        return [r.label, r.spectroscopic, r.z, r.charge, r.mass_number ?? '', r.isoelectronic ?? '', p.configuration, p.term, p.referenceEv, p.referenceUncertaintyEv, p.referenceSource, p.bestEv, p.bestMethod, r.samples, r.engine ?? '', new Date(r.created_at).toISOString()]
       }),
-      { ...GUARDED_CSV, header: true, columns: ['species', 'spectroscopic', 'z', 'charge', 'mass_number', 'isoelectronic', 'configuration', 'term', 'reference_eV', 'reference_source', 'best_estimate_eV', 'best_estimate_method', 'samples', 'engine', 'recorded_at'] },
+      { ...GUARDED_CSV, header: true, columns: ['species', 'spectroscopic', 'z', 'charge', 'mass_number', 'isoelectronic', 'configuration', 'term', 'reference_eV', 'reference_uncertainty_eV', 'reference_source', 'best_estimate_eV', 'best_estimate_method', 'samples', 'engine', 'recorded_at'] },
     )
   }
 
