@@ -19,6 +19,7 @@
  * skipped. --check compares with the committed file and exits 1 when it differs.
  */
 import { readFileSync, writeFileSync } from 'node:fs'
+import { parse as parseCsv } from 'csv-parse/sync'
 import { fileURLToPath } from 'node:url'
 import { NIST_ASD_ROWS } from '../../shared/physics/data/nist-asd'
 
@@ -27,29 +28,6 @@ const input = process.argv[2]
 if (!input) {
   console.error('usage: tsx scripts/reference/build-nist-asd-detail.ts PATH/TO/ionization_energies.csv [--check]')
   process.exit(2)
-}
-
-/** Splits one CSV line; fields may be quoted ("(0,3/2)*<3/2>"). */
-export function splitCsv(line: string): string[] {
-  const out: string[] = []
-  let field = ''
-  let quoted = false
-  for (let i = 0; i < line.length; i++) {
-    const c = line[i]
-    if (quoted) {
-      if (c === '"' && line[i + 1] === '"') {
-        field += '"'
-        i++
-      } else if (c === '"') quoted = false
-      else field += c
-    } else if (c === '"') quoted = true
-    else if (c === ',') {
-      out.push(field)
-      field = ''
-    } else field += c
-  }
-  out.push(field)
-  return out
 }
 
 /** ASD writes odd parity as '*' and half-integer J in angle brackets: 4I*<15/2> → 4I°15/2. */
@@ -71,13 +49,14 @@ interface Row {
   uncertaintyEv: number | null
 }
 
-function parse(text: string): Row[] {
+function readExport(text: string): Row[] {
   const rows: Row[] = []
   const seen = new Set<string>()
-  for (const [index, raw] of text.split(/\r?\n/).entries()) {
-    const line = raw.trim()
-    if (line === '' || line.startsWith('At. Num')) continue
-    const f = splitCsv(line)
+  // fields may be quoted and hold commas: "(0,3/2)*<3/2>"
+  const records = parseCsv(text, { skip_empty_lines: true, relax_column_count: true }) as string[][]
+  for (const [index, f] of records.entries()) {
+    if (f[0]?.startsWith('At. Num')) continue
+    const line = f.join(',')
     if (f.length !== 6) throw new Error(`line ${index + 1}: ${f.length} fields, expected 6: ${line}`)
     const [zText, chargeText, shells, levelText, energyText, uncertaintyText] = f
     const z = Number(zText)
@@ -100,7 +79,7 @@ function parse(text: string): Row[] {
   return rows
 }
 
-const rows = parse(readFileSync(input, 'utf8'))
+const rows = readExport(readFileSync(input, 'utf8'))
 const byZ = new Map<number, Map<number, Row>>()
 for (const r of rows) {
   if (!byZ.has(r.z)) byZ.set(r.z, new Map())

@@ -6,6 +6,7 @@
  */
 import { NIST_ASD_ROWS, NIST_ASD_SOURCE } from './data/nist-asd'
 import { NIST_ASD_DETAIL, NIST_ASD_DETAIL_SOURCE } from './data/nist-asd-detail'
+import { parseConfiguration, subshellLabel } from './subshells'
 
 export interface SourcedValue {
   eV: number
@@ -115,30 +116,16 @@ export function referenceIonGroundLevel(z: number, charge: number): string | nul
   return levelOf(NIST_ASD_DETAIL[z - 1]?.[charge]?.[4])
 }
 
-const CORES: Readonly<Record<string, string>> = {
-  '[He]': '1s2',
-  '[Ne]': '1s2.2s2.2p6',
-  '[Ar]': '1s2.2s2.2p6.3s2.3p6',
-  '[Kr]': '1s2.2s2.2p6.3s2.3p6.3d10.4s2.4p6',
-  '[Cd]': '1s2.2s2.2p6.3s2.3p6.3d10.4s2.4p6.4d10.5s2',
-  '[Xe]': '1s2.2s2.2p6.3s2.3p6.3d10.4s2.4p6.4d10.5s2.5p6',
-  '[Hg]': '1s2.2s2.2p6.3s2.3p6.3d10.4s2.4p6.4d10.5s2.5p6.4f14.5d10.6s2',
-  '[Rn]': '1s2.2s2.2p6.3s2.3p6.3d10.4s2.4p6.4d10.5s2.5p6.4f14.5d10.6s2.6p6',
-}
-
 /**
- * ASD's ground shells as occupations by subshell label ('4f' → 11), cores expanded (the cores
- * are the ones ASD's export defines in its notes); null where the text cannot be read.
+ * ASD's ground shells as occupations by subshell label ('4f' → 11), read with the engine's own
+ * configuration parser once ASD's two cores that are not noble gases are written out ([Cd] and
+ * [Hg], as the export's notes define them); null where the text cannot be read.
  */
 export function groundShellOccupations(shells: string): Map<string, number> | null {
-  const out = new Map<string, number>()
-  let text = shells.trim()
-  for (const [core, expansion] of Object.entries(CORES)) if (text.startsWith(core)) text = expansion + text.slice(core.length)
-  for (const part of text.split('.').filter((p) => p !== '')) {
-    const m = /^(\d+)([spdfg])(\d*)$/.exec(part)
-    if (!m) return null
-    const label = `${m[1]}${m[2]}`
-    out.set(label, (out.get(label) ?? 0) + (m[3] === '' ? 1 : Number(m[3])))
+  const text = shells.replace('[Cd]', '[Kr] 4d10 5s2 ').replace('[Hg]', '[Xe] 4f14 5d10 6s2 ').replace(/\./g, ' ')
+  try {
+    return new Map(parseConfiguration(text).map((s) => [subshellLabel(s.n, s.l), s.electrons]))
+  } catch {
+    return null
   }
-  return out
 }
