@@ -54,6 +54,20 @@ describe('species look-up page', () => {
     await snap(page, 'species-u-phone')
     await context.close()
   })
+
+  it('opens the look-up for an ion typed into the address bar as /species/<ion>, not a 404', async () => {
+    const context = await newContext(browser)
+    const page = await context.newPage()
+    await signInAs(page, 'technician')
+    const reply = await page.goto('/species/Fe13+')
+    expect(reply?.status()).toBe(200)
+    await page.getByTestId('species-result').waitFor()
+    expect(new URL(page.url()).pathname).toBe('/species')
+    expect(new URL(page.url()).searchParams.get('q')).toBe('Fe13+')
+    // Fe13+ is Fe XIV, Al-like: [Ne] 3s2 3p (NIST ASD ground level, as in the first test of this file).
+    await expect(page.getByTestId('core-configuration').innerText()).resolves.toBe('[Ne] 3s2 3p1')
+    await context.close()
+  })
 })
 
 describe('recording a species and linking a sample', () => {
