@@ -10,9 +10,12 @@
  * (P. J. Mohr, Phys. Rev. A 46, 4421 (1992); Mohr, Taylor and Newell, CODATA 2006, Rev. Mod. Phys.
  * 80, 633 (2008), eq. for F):
  *   F = A41 L + A40 + A50 (Zα) + (Zα)² [A62 L² + A61 L + G(Zα)],  L = ln (Zα)⁻²,
- * with A41 = 4/3, A40 = 10/9 − (4/3) ln k0, ln k0(1s) = 2.984 128 556, A50 = 4π (139/128 − ln2 / 2),
- * A62 = −1, A61 = 28/3 ln 2 − 21/20 and G(0) = A60 = −30.924 15 (coefficients from memory;
- * they reproduce F(1) = 10.3168, the hydrogen value of the same papers, to 1e−4).
+ * with A41 = 4/3, A40 = 10/9 − (4/3) ln k0, A50 = 4π (139/128 − ln2 / 2), A62 = −1 and
+ * A61 = 28/3 ln 2 − 21/20 (closed forms from memory), the Bethe logarithm ln k0(1s) = 2.984 128 556
+ * (G. W. F. Drake and R. A. Swainson, Phys. Rev. A 41, 1243 (1990)) and G(0) = A60 = −30.924 15(1)
+ * (U. D. Jentschura, P. J. Mohr and G. Soff, Phys. Rev. Lett. 82, 53 (1999)). The two numbers were
+ * read as several independent public research codes quote them with those citations, not in the
+ * papers themselves; together they reproduce F(1) = 10.3168, the hydrogen value, to 1e−4.
  */
 
 const F_TABLE: readonly (readonly [number, number])[] = [
