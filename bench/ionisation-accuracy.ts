@@ -19,7 +19,7 @@
  */
 import { writeFileSync } from 'node:fs'
 import { pathToFileURL } from 'node:url'
-import { CLASS_KEYS, speciesClass } from '../shared/physics/best-estimate'
+import { CLASS_KEYS, inClass, speciesClass } from '../shared/physics/best-estimate'
 import { METHODS, describeSpecies, getElement, referenceIonisationDetail, referenceIonisationEv } from '../shared/physics/index'
 import type { ScfSpeciesEstimates } from '../shared/physics/scf/types'
 
@@ -126,7 +126,7 @@ function measure(): Measured[] {
 export function classFigures(species: readonly Measured[] = measure()): ClassFigures {
   const out: ClassFigures = {}
   for (const key of CLASS_KEYS) {
-    const members = species.filter((s) => speciesClass(s.z, s.charge).key === key)
+    const members = species.filter((s) => inClass(s.z, s.charge, key))
     out[key] = providers
       .map((p): [string, number, number] => {
         const xs = members.flatMap((s) => (s.byMethod.has(p.method) ? [s.byMethod.get(p.method)!] : []))
@@ -138,14 +138,21 @@ export function classFigures(species: readonly Measured[] = measure()): ClassFig
   return out
 }
 
-/** The best method for one species by the class figures (smallest class mean among those with a number). */
+/**
+ * The best method for one species by the class figures (smallest class mean among those with a
+ * number), from its own class or, where that has too few species, the wider one (best-estimate.ts).
+ */
 function bestMethod(s: Measured, figures: ClassFigures): string | null {
-  let best: [number, string] | null = null
-  for (const [method, meanPercent, n] of figures[speciesClass(s.z, s.charge).key] ?? []) {
-    if (!s.byMethod.has(method) || n < 3) continue
-    if (!best || meanPercent < best[0]) best = [meanPercent, method]
+  const cls = speciesClass(s.z, s.charge)
+  for (const key of cls.parent ? [cls.key, cls.parent.key] : [cls.key]) {
+    let best: [number, string] | null = null
+    for (const [method, meanPercent, n] of figures[key] ?? []) {
+      if (!s.byMethod.has(method) || n < 3) continue
+      if (!best || meanPercent < best[0]) best = [meanPercent, method]
+    }
+    if (best) return best[1]
   }
-  return best ? best[1] : null
+  return null
 }
 
 function bestDeviation(s: Measured, figures: ClassFigures): number | null {
@@ -256,7 +263,7 @@ export function runAccuracyBench(out: (line: string) => void = (l) => process.st
   out('Best estimate by class (mean |deviation| %, species): the method the species page leads with')
   for (const key of CLASS_KEYS) {
     const [best] = figures[key] ?? []
-    out(`  ${key.padEnd(14)} ${best ? `${best[0]}  ±${best[1]} % (${best[2]})` : '—'}`)
+    out(`  ${key.padEnd(18)} ${best ? `${best[0]}  ±${best[1]} % (${best[2]})` : '—'}`)
   }
   return { results, figures }
 }

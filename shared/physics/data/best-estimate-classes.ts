@@ -12,6 +12,20 @@ export const CLASS_FIGURES: Readonly<Record<string, readonly (readonly [string, 
     ['slater-total-energy', 23.8, 17],
     ['slater-hydrogenic', 224, 17],
   ],
+  'light-neutral-sp': [
+    ['scf-eigenvalue', 3.25, 17],
+    ['dirac-scf-eigenvalue', 3.28, 17],
+    ['dirac-scf-delta', 3.34, 17],
+    ['scf-delta', 3.43, 17],
+    ['slater-total-energy', 23.8, 17],
+    ['slater-hydrogenic', 224, 17],
+  ],
+  'light-neutral-d': [
+
+  ],
+  'light-neutral-f': [
+
+  ],
   'light-low': [
     ['dirac-scf-eigenvalue', 1.25, 50],
     ['scf-eigenvalue', 1.29, 50],
@@ -19,6 +33,20 @@ export const CLASS_FIGURES: Readonly<Record<string, readonly (readonly [string, 
     ['dirac-scf-delta', 1.47, 50],
     ['slater-total-energy', 5.8, 50],
     ['slater-hydrogenic', 74.7, 50],
+  ],
+  'light-low-sp': [
+    ['dirac-scf-eigenvalue', 1.25, 50],
+    ['scf-eigenvalue', 1.29, 50],
+    ['scf-delta', 1.46, 50],
+    ['dirac-scf-delta', 1.47, 50],
+    ['slater-total-energy', 5.8, 50],
+    ['slater-hydrogenic', 74.7, 50],
+  ],
+  'light-low-d': [
+
+  ],
+  'light-low-f': [
+
   ],
   'light-high': [
     ['dirac-scf-eigenvalue', 0.499, 55],
@@ -28,6 +56,20 @@ export const CLASS_FIGURES: Readonly<Record<string, readonly (readonly [string, 
     ['slater-total-energy', 2.47, 55],
     ['slater-hydrogenic', 26.2, 55],
   ],
+  'light-high-sp': [
+    ['dirac-scf-eigenvalue', 0.499, 55],
+    ['scf-eigenvalue', 0.518, 55],
+    ['dirac-scf-delta', 0.77, 55],
+    ['scf-delta', 0.773, 55],
+    ['slater-total-energy', 2.47, 55],
+    ['slater-hydrogenic', 26.2, 55],
+  ],
+  'light-high-d': [
+
+  ],
+  'light-high-f': [
+
+  ],
   'medium-neutral': [
     ['dirac-scf-eigenvalue', 3.41, 36],
     ['scf-delta', 3.94, 36],
@@ -35,6 +77,25 @@ export const CLASS_FIGURES: Readonly<Record<string, readonly (readonly [string, 
     ['dirac-scf-delta', 4.28, 36],
     ['slater-total-energy', 66.7, 35],
     ['slater-hydrogenic', 154, 36],
+  ],
+  'medium-neutral-sp': [
+    ['dirac-scf-eigenvalue', 3.12, 34],
+    ['scf-delta', 3.34, 34],
+    ['scf-eigenvalue', 3.63, 34],
+    ['dirac-scf-delta', 3.97, 34],
+    ['slater-total-energy', 66.7, 34],
+    ['slater-hydrogenic', 149, 34],
+  ],
+  'medium-neutral-d': [
+    ['dirac-scf-eigenvalue', 8.42, 2],
+    ['dirac-scf-delta', 9.48, 2],
+    ['scf-eigenvalue', 11.6, 2],
+    ['scf-delta', 14.2, 2],
+    ['slater-total-energy', 68.2, 1],
+    ['slater-hydrogenic', 252, 2],
+  ],
+  'medium-neutral-f': [
+
   ],
   'medium-low': [
     ['dirac-scf-eigenvalue', 2.2, 144],
@@ -44,6 +105,25 @@ export const CLASS_FIGURES: Readonly<Record<string, readonly (readonly [string, 
     ['slater-total-energy', 28, 144],
     ['slater-hydrogenic', 68.9, 144],
   ],
+  'medium-low-sp': [
+    ['scf-delta', 1.21, 73],
+    ['dirac-scf-delta', 1.51, 73],
+    ['dirac-scf-eigenvalue', 1.7, 73],
+    ['scf-eigenvalue', 2.34, 73],
+    ['slater-total-energy', 20, 73],
+    ['slater-hydrogenic', 69.6, 73],
+  ],
+  'medium-low-d': [
+    ['dirac-scf-eigenvalue', 2.71, 71],
+    ['scf-eigenvalue', 3.48, 71],
+    ['dirac-scf-delta', 3.63, 71],
+    ['scf-delta', 4.72, 71],
+    ['slater-total-energy', 36.2, 71],
+    ['slater-hydrogenic', 68.2, 71],
+  ],
+  'medium-low-f': [
+
+  ],
   'medium-high': [
     ['dirac-scf-eigenvalue', 0.471, 1026],
     ['dirac-scf-delta', 0.575, 1026],
@@ -51,6 +131,25 @@ export const CLASS_FIGURES: Readonly<Record<string, readonly (readonly [string, 
     ['scf-delta', 1.06, 1026],
     ['slater-total-energy', 10.2, 1026],
     ['slater-hydrogenic', 13.4, 1026],
+  ],
+  'medium-high-sp': [
+    ['dirac-scf-delta', 0.41, 676],
+    ['dirac-scf-eigenvalue', 0.43, 676],
+    ['scf-delta', 0.947, 676],
+    ['scf-eigenvalue', 1.33, 676],
+    ['slater-total-energy', 3.65, 676],
+    ['slater-hydrogenic', 12, 676],
+  ],
+  'medium-high-d': [
+    ['scf-eigenvalue', 0.526, 350],
+    ['dirac-scf-eigenvalue', 0.552, 350],
+    ['dirac-scf-delta', 0.892, 350],
+    ['scf-delta', 1.29, 350],
+    ['slater-hydrogenic', 16, 350],
+    ['slater-total-energy', 22.8, 350],
+  ],
+  'medium-high-f': [
+
   ],
   'heavy-neutral': [
     ['dirac-scf-eigenvalue', 3.23, 49],
@@ -60,6 +159,24 @@ export const CLASS_FIGURES: Readonly<Record<string, readonly (readonly [string, 
     ['slater-total-energy', 33.5, 42],
     ['slater-hydrogenic', 53.5, 49],
   ],
+  'heavy-neutral-sp': [
+    ['dirac-scf-eigenvalue', 3.11, 42],
+    ['dirac-scf-delta', 3.69, 42],
+    ['scf-delta', 9.42, 42],
+    ['scf-eigenvalue', 12.5, 42],
+    ['slater-total-energy', 33.5, 42],
+    ['slater-hydrogenic', 56.6, 42],
+  ],
+  'heavy-neutral-d': [
+    ['dirac-scf-eigenvalue', 3.97, 7],
+    ['dirac-scf-delta', 6.02, 7],
+    ['scf-eigenvalue', 12.9, 7],
+    ['scf-delta', 28.7, 7],
+    ['slater-hydrogenic', 35, 7],
+  ],
+  'heavy-neutral-f': [
+
+  ],
   'heavy-low': [
     ['dirac-scf-eigenvalue', 4.7, 196],
     ['dirac-scf-delta', 4.92, 196],
@@ -68,6 +185,30 @@ export const CLASS_FIGURES: Readonly<Record<string, readonly (readonly [string, 
     ['slater-total-energy', 36.3, 194],
     ['slater-hydrogenic', 269, 196],
   ],
+  'heavy-low-sp': [
+    ['dirac-scf-eigenvalue', 2.41, 81],
+    ['dirac-scf-delta', 3.24, 81],
+    ['scf-eigenvalue', 7.97, 81],
+    ['scf-delta', 10.6, 81],
+    ['slater-total-energy', 28.1, 81],
+    ['slater-hydrogenic', 56.1, 81],
+  ],
+  'heavy-low-d': [
+    ['dirac-scf-eigenvalue', 2.97, 37],
+    ['dirac-scf-delta', 3.99, 37],
+    ['scf-eigenvalue', 4.36, 37],
+    ['scf-delta', 7.85, 37],
+    ['slater-hydrogenic', 46.9, 37],
+    ['slater-total-energy', 49, 37],
+  ],
+  'heavy-low-f': [
+    ['dirac-scf-delta', 7.1, 78],
+    ['dirac-scf-eigenvalue', 7.9, 78],
+    ['scf-delta', 25.2, 78],
+    ['scf-eigenvalue', 26, 78],
+    ['slater-total-energy', 38.7, 76],
+    ['slater-hydrogenic', 595, 78],
+  ],
   'heavy-high': [
     ['dirac-scf-delta', 0.929, 3479],
     ['dirac-scf-eigenvalue', 0.966, 3479],
@@ -75,6 +216,30 @@ export const CLASS_FIGURES: Readonly<Record<string, readonly (readonly [string, 
     ['scf-eigenvalue', 3.55, 3479],
     ['slater-total-energy', 9.69, 3479],
     ['slater-hydrogenic', 14.8, 3479],
+  ],
+  'heavy-high-sp': [
+    ['dirac-scf-delta', 0.656, 1606],
+    ['dirac-scf-eigenvalue', 0.71, 1606],
+    ['scf-delta', 5.25, 1606],
+    ['scf-eigenvalue', 5.42, 1606],
+    ['slater-total-energy', 7.67, 1606],
+    ['slater-hydrogenic', 12.9, 1606],
+  ],
+  'heavy-high-d': [
+    ['dirac-scf-eigenvalue', 0.26, 1235],
+    ['dirac-scf-delta', 0.287, 1235],
+    ['scf-eigenvalue', 0.81, 1235],
+    ['scf-delta', 1.02, 1235],
+    ['slater-hydrogenic', 7.23, 1235],
+    ['slater-total-energy', 12.6, 1235],
+  ],
+  'heavy-high-f': [
+    ['dirac-scf-delta', 2.86, 638],
+    ['dirac-scf-eigenvalue', 2.98, 638],
+    ['scf-delta', 3.31, 638],
+    ['scf-eigenvalue', 4.11, 638],
+    ['slater-total-energy', 9.08, 638],
+    ['slater-hydrogenic', 34.2, 638],
   ],
   'one-electron': [
     ['dirac-qed-hydrogen-like', 0.000996, 103],

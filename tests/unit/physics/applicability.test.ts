@@ -71,6 +71,32 @@ describe('the best estimate', () => {
     expect(fe.bestEstimate?.typicalPercent).toBe(Math.min(...figures.map((f) => f[1])))
   })
 
+  // Ground shells as NIST ASD 5.12 gives them (its ground states and ionization energies export,
+  // shared/physics/data/nist-asd-detail.ts): Er IV [Xe] 4f11 → Er V 4f10, W VI [Xe] 4f14 5d → W VII
+  // 4f14, Xe IX [Kr] 4d10 → Xe X 4d9, Xe VIII [Kr] 4d10 5s → Xe IX 4d10, Pd I [Kr] 4d10 → Pd II 4d9.
+  it('splits the many-electron classes by the shell the next electron leaves', () => {
+    expect(speciesClass(68, 3)).toEqual({
+      key: 'heavy-low-f',
+      label: 'ions of charge 1–4, Z ≥ 55, losing an f electron',
+      parent: { key: 'heavy-low', label: 'ions of charge 1–4, Z ≥ 55' },
+    })
+    expect(speciesClass(74, 5).key).toBe('heavy-high-d')
+    expect(speciesClass(54, 8).key).toBe('medium-high-d')
+    expect(speciesClass(54, 7).key).toBe('medium-high-sp')
+    expect(speciesClass(54, 53).parent).toBeUndefined()
+    // the bench measures the wide class over all its parts
+    const figures = Object.fromEntries(['heavy-high', 'heavy-high-sp', 'heavy-high-d', 'heavy-high-f'].map((k) => [k, CLASS_FIGURES[k]!.find(([m]) => m === 'slater-hydrogenic')![2]]))
+    expect(figures['heavy-high-sp']! + figures['heavy-high-d']! + figures['heavy-high-f']!).toBe(figures['heavy-high'])
+  })
+
+  it('falls back to the wide class where the shell\'s own class has too few species measured', () => {
+    // neutral Pd loses a 4d electron; fewer than three neutral atoms of Z = 19–54 do
+    expect(CLASS_FIGURES['medium-neutral-d']!.every(([, , n]) => n < 3)).toBe(true)
+    const best = bestEstimate(46, 0, [{ method: 'dirac-scf-eigenvalue', eV: 8.1 }])
+    expect(best).toMatchObject({ method: 'dirac-scf-eigenvalue', classLabel: 'neutral atoms, Z = 19–54' })
+    expect(best!.typicalPercent).toBe(CLASS_FIGURES['medium-neutral']!.find(([m]) => m === 'dirac-scf-eigenvalue')![1])
+  })
+
   it('is null when no method with a number has a figure', () => {
     expect(bestEstimate(26, 13, [])).toBeNull()
     expect(bestEstimate(26, 13, [{ method: 'slater-hydrogenic', eV: null, notApplicable: 'x' }])).toBeNull()
