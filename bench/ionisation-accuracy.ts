@@ -211,6 +211,29 @@ export function uncertaintyBreakdown(
   ]
 }
 
+/**
+ * * A group of species (the heavy highly charged ions, say) by the kind of subshell the next electron leaves (the split of
+ * best-estimate.ts), each kind by whether NIST states its reference to better than 1 %: whether a
+ * kind's misses come from the method or from rough references.
+ */
+export function shellBreakdown(group: readonly Measured[], label: string, figures: ClassFigures): string[] {
+  const lines = [`${label}, by the subshell the next electron leaves: best estimate against references stated to < 1 % | to 1 % or worse`]
+  const part = (xs: readonly Measured[]) => {
+    const ds = xs.flatMap((s) => {
+      const d = bestDeviation(s, figures)
+      return d === null ? [] : [d]
+    })
+    return ds.length ? `${ds.length} species, mean ${mean(ds).toFixed(2)} %, ${ds.filter((d) => d > 3).length} beyond 3 %` : 'none'
+  }
+  for (const [kind, text] of [['sp', 's or p'], ['d', 'd'], ['f', 'f']] as const) {
+    const members = group.filter((s) => speciesClass(s.z, s.charge).key.endsWith(`-${kind}`))
+    const precise = members.filter((s) => s.uncertaintyPercent !== null && s.uncertaintyPercent < 1)
+    const rest = members.filter((s) => !precise.includes(s))
+    lines.push(`  ${text.padEnd(6)} ${part(precise).padEnd(44)} | ${part(rest)}`)
+  }
+  return lines
+}
+
 /** Computes and prints the table; returns the deviations by method and group label, and the class figures. */
 export function runAccuracyBench(out: (line: string) => void = (l) => process.stdout.write(`${l}\n`)) {
   const species = measure()
@@ -259,6 +282,11 @@ export function runAccuracyBench(out: (line: string) => void = (l) => process.st
   for (let i = 0; i < beyond.length; i += 8) out(`  ${beyond.slice(i, i + 8).map(({ s, signed }) => label(s, signed)).join(', ')}`)
   out('')
   for (const line of uncertaintyBreakdown(heavy, beyond)) out(line)
+  out('')
+  for (const line of shellBreakdown(heavy, 'Heavy highly charged ions (Z ≥ 36, q ≥ 5)', figures)) out(line)
+  out('')
+  const heavyLow = species.filter((s) => s.z >= 55 && s.charge >= 1 && s.charge <= 4)
+  for (const line of shellBreakdown(heavyLow, 'Ions of charge 1–4, Z ≥ 55', figures)) out(line)
   out('')
   out('Best estimate by class (mean |deviation| %, species): the method the species page leads with')
   for (const key of CLASS_KEYS) {
