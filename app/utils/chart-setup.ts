@@ -14,6 +14,7 @@ export const METHOD_COLOURS: Readonly<Record<string, string>> = {
   'scf-eigenvalue': '#db2777',
   'dirac-scf-delta': '#0891b2',
   'dirac-scf-eigenvalue': '#c2410c',
+  'dirac-lsd-delta': '#65a30d',
   'dirac-scf-delta-qed': '#4f46e5',
 }
 export const REFERENCE_COLOUR = '#0f172a'

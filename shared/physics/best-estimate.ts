@@ -46,9 +46,9 @@ export function speciesClass(z: number, charge: number): SpeciesClass {
 /**
  * The many-electron classes are split by the kind of subshell the next electron leaves: the local
  * density methods are far less accurate for removing an f electron than an s, p or d one
- * (measured in bench/ionisation-accuracy.ts, engine 1.3.1: for Z ≥ 55 and q ≥ 5 the best method
- * is off by 0.66 % on average for s and p, 0.26 % for d and 2.9 % for f electrons; for q = 1–4 by
- * 2.4 %, 3.0 % and 7.1 %), so one figure per charge and Z band would promise lanthanide and
+ * (measured in bench/ionisation-accuracy.ts, engine 1.4.0: for Z ≥ 55 and q ≥ 5 the best method
+ * is off by 0.63 % on average for s and p, 0.20 % for d and 2.9 % for f electrons; for q = 1–4 by
+ * 2.4 %, 3.0 % and 5.4 %), so one figure per charge and Z band would promise lanthanide and
  * actinide ions an accuracy they do not get, and hide that the ΔSCF and eigenvalue estimates rank
  * differently for different shells.
  */

@@ -181,7 +181,9 @@ export function describeSpecies(input: string | ParsedSpecies, options: Describe
         : scf.byMethod?.[info.name]
       // a method the caller's SCF results do not cover is left out (not computed), not "not applicable"
       if (value === undefined) continue
-      const basis = relativistic && dirac ? dirac.species.method : scf.species.method
+      // dirac-lsd-delta keeps no solution of its own, only its energy: its basis is named here
+      // (DIRAC_METHOD_NAMES.lsd of scf/dirac-scf.ts, which this module does not load)
+      const basis = info.name === 'dirac-lsd-delta' ? 'dks-lsd-spherical' : relativistic && dirac ? dirac.species.method : scf.species.method
       estimates.push(judged(info.name, species, value, referenceEv, { basis, missing, corrections: screened?.corrections }))
     }
     if (dirac) {

@@ -55,7 +55,12 @@ export function solveSpeciesDirac(z: number, charge: number, options: DiracOptio
   return diracSpeciesEstimates(z, charge, options.configurationOf ?? groundConfiguration, { ...options, massNumber })
 }
 
-/** Both solvers for one species, as the cache stores them: the non-relativistic estimates with `dirac` beside. */
+/**
+ * Both solvers for one species, as the cache stores them: the non-relativistic estimates with
+ * `dirac` beside, and the relativistic ΔSCF without the self-interaction correction
+ * (`dirac-lsd-delta`, a total-energy difference only: no densities are kept for it).
+ */
 export function solveSpeciesAll(z: number, charge: number, options: ScfSpeciesOptions = {}): ScfSpeciesEstimates {
-  return { ...solveSpeciesScf(z, charge, options), dirac: solveSpeciesDirac(z, charge, options) }
+  const lsd = solveSpeciesDirac(z, charge, { ...options, functional: 'lsd', densityPoints: 0 })
+  return { ...solveSpeciesScf(z, charge, options), dirac: solveSpeciesDirac(z, charge, options), byMethod: { 'dirac-lsd-delta': lsd.deltaEv } }
 }

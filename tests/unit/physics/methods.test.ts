@@ -31,6 +31,7 @@ describe('constants', () => {
       'dirac-qed-hydrogen-like',
       'dirac-scf-delta',
       'dirac-scf-eigenvalue',
+      'dirac-lsd-delta',
       'dirac-scf-delta-qed',
     ])
     for (const m of METHODS) {
