@@ -19,7 +19,7 @@
  */
 import { writeFileSync } from 'node:fs'
 import { pathToFileURL } from 'node:url'
-import { CLASS_KEYS, inClass, speciesClass } from '../shared/physics/best-estimate'
+import { CLASS_KEYS, bestFigure, inClass, speciesClass } from '../shared/physics/best-estimate'
 import { METHODS, describeSpecies, getElement, referenceIonisationDetail, referenceIonisationEv } from '../shared/physics/index'
 import type { ScfSpeciesEstimates } from '../shared/physics/scf/types'
 
@@ -138,21 +138,9 @@ export function classFigures(species: readonly Measured[] = measure()): ClassFig
   return out
 }
 
-/**
- * The best method for one species by the class figures (smallest class mean among those with a
- * number), from its own class or, where that has too few species, the wider one (best-estimate.ts).
- */
+/** The best method for one species by the class figures just measured (best-estimate.ts's choice). */
 function bestMethod(s: Measured, figures: ClassFigures): string | null {
-  const cls = speciesClass(s.z, s.charge)
-  for (const key of cls.parent ? [cls.key, cls.parent.key] : [cls.key]) {
-    let best: [number, string] | null = null
-    for (const [method, meanPercent, n] of figures[key] ?? []) {
-      if (!s.byMethod.has(method) || n < 3) continue
-      if (!best || meanPercent < best[0]) best = [meanPercent, method]
-    }
-    if (best) return best[1]
-  }
-  return null
+  return bestFigure(s.z, s.charge, (method) => s.byMethod.has(method), figures)?.figure[0] ?? null
 }
 
 function bestDeviation(s: Measured, figures: ClassFigures): number | null {

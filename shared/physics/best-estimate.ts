@@ -93,20 +93,35 @@ const SOURCE = 'mean absolute deviation from NIST ASD over the species of this c
 
 /** The best of the given estimates for (z, charge), or null when none has a class figure. */
 export function bestEstimate(z: number, charge: number, estimates: readonly Estimate[]): BestEstimate | null {
+  const numbers = new Map(estimates.flatMap((e) => (e.eV === null ? [] : [[e.method, e.eV] as const])))
+  const pick = bestFigure(z, charge, (method) => numbers.has(method as MethodName))
+  if (!pick) return null
+  const [method, typicalPercent, n] = pick.figure
+  return { method: method as MethodName, eV: numbers.get(method as MethodName)!, typicalPercent, n, classLabel: pick.label, source: SOURCE }
+}
+
+type Figure = readonly [string, number, number]
+
+/**
+ * The class figure the best estimate rests on: among the methods `gives` says have a number, the
+ * one with the smallest class mean, from the species' own class where it has enough species
+ * measured, else from the wider class it splits. `figures` defaults to the generated file; the
+ * accuracy bench passes the figures it has just measured.
+ */
+export function bestFigure(
+  z: number,
+  charge: number,
+  gives: (method: string) => boolean,
+  figures: Readonly<Record<string, readonly Figure[]>> = CLASS_FIGURES,
+): { figure: Figure; label: string } | null {
   const cls = speciesClass(z, charge)
-  // the narrow class where it has enough species measured, else the wider one it splits
   for (const c of cls.parent ? [cls, cls.parent] : [cls]) {
-    const figures = CLASS_FIGURES[c.key] ?? []
-    let best: BestEstimate | null = null
-    for (const e of estimates) {
-      if (e.eV === null) continue
-      const figure = figures.find(([method]) => method === e.method)
-      if (!figure || figure[2] < MIN_SPECIES) continue
-      if (!best || figure[1] < best.typicalPercent) {
-        best = { method: e.method, eV: e.eV, typicalPercent: figure[1], n: figure[2], classLabel: c.label, source: SOURCE }
-      }
+    let best: Figure | null = null
+    for (const figure of figures[c.key] ?? []) {
+      if (figure[2] < MIN_SPECIES || !gives(figure[0])) continue
+      if (!best || figure[1] < best[1]) best = figure
     }
-    if (best) return best
+    if (best) return { figure: best, label: c.label }
   }
   return null
 }
