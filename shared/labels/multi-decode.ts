@@ -90,10 +90,10 @@ function shrink(img: Pixels, f: number): Pixels {
   return { data, width: w, height: h }
 }
 
-/** Overlapping tiles of `side` px every `stride` px across `img`, each decoded on its own. */
-function decodeTiles(img: Pixels, side: number, stride: number, found: string[], sizes: number[]) {
-  for (let y = 0; y + stride < img.height || y === 0; y += stride) {
-    for (let x = 0; x + stride < img.width || x === 0; x += stride) {
+/** Overlapping tiles of `side` px every `stride` px across `img` from (`start`, `start`), each decoded on its own. */
+function decodeTiles(img: Pixels, side: number, stride: number, found: string[], sizes: number[], start = 0) {
+  for (let y = start; y + stride < img.height || y === start; y += stride) {
+    for (let x = start; x + stride < img.width || x === start; x += stride) {
       const w = Math.min(side, img.width - x)
       const h = Math.min(side, img.height - y)
       // A code found is painted over in the whole image too, so the tiles overlapping it
@@ -123,6 +123,12 @@ export function decodeAll(img: Pixels): string[] {
   const f = Math.min(1, 80 / q)
   const small = f < 0.9 ? shrink(img, f) : crop(img, 0, 0, img.width, img.height)
   const qs = q * (f < 0.9 ? f : 1)
-  decodeTiles(small, Math.round(2 * qs), Math.round(0.7 * qs), found, sizes)
+  const side = Math.round(2 * qs)
+  const stride = Math.round(0.7 * qs)
+  decodeTiles(small, side, stride, found, sizes)
+  // jsQR can still miss a code in every tile of that grid (a neighbour's finder pattern at the
+  // tile's edge); the codes found are painted over by now, so a grid shifted by half a stride
+  // looks again at what is left
+  decodeTiles(small, side, stride, found, sizes, Math.round(stride / 2))
   return found
 }

@@ -3,6 +3,10 @@ import { everyone, type Client } from '../support/api'
 import { readFileSync } from 'node:fs'
 import { PNG } from 'pngjs'
 import { decodeAll } from '../../shared/labels/multi-decode'
+import { labelContent } from '../../shared/labels/content'
+import { labelsDocument } from '../../server/pdf/labels'
+import { renderPdf } from '../../server/pdf/fonts'
+import { preparePackageFonts } from '../../server/pdf/package-fonts'
 import { closeTestDb, testDb } from '../support/db'
 import { createSample } from '../support/samples'
 import { cropMm, inkBox, longestDarkRunMm, pdfPages, pdfText, redPixels, renderPages, zbar } from '../support/pdf'
@@ -152,5 +156,18 @@ describe('a photo of a whole sheet', () => {
     const png = PNG.sync.read(readFileSync(page!))
     const found = decodeAll({ data: new Uint8ClampedArray(png.data.buffer, png.data.byteOffset, png.data.length), width: png.width, height: png.height })
     expect([...found].sort()).toEqual(chosen.map((s) => `${base()}/scan/${s.code}`).sort())
+  }, 120_000)
+
+  // A sheet whose codes point at port 39029 once left S-2026-000011 unread: jsQR missed it in
+  // every tile of the fine grid. The same sheet, built here as the server builds it, must give all 30.
+  it('finds every code of the sheet that once lost one (codes for http://127.0.0.1:39029)', async () => {
+    await preparePackageFonts()
+    const content = Array.from({ length: 30 }, (_, i) =>
+      labelContent({ code: `S-2026-${String(i + 1).padStart(6, '0')}`, name: `Demo foil ${i + 1}`, formula: null, form: 'foil', radioactive: false, nuclide: null, hazardStatements: [], place: null, components: [] }, 'http://127.0.0.1:39029'),
+    )
+    const [page] = await renderPages(await renderPdf(labelsDocument(content, 'sheet', 'Larchmere Ion Beam Laboratory')), 150)
+    const png = PNG.sync.read(readFileSync(page!))
+    const found = decodeAll({ data: new Uint8ClampedArray(png.data.buffer, png.data.byteOffset, png.data.length), width: png.width, height: png.height })
+    expect([...found].sort()).toEqual(content.map((_, i) => `http://127.0.0.1:39029/scan/S-2026-${String(i + 1).padStart(6, '0')}`).sort())
   }, 120_000)
 })
