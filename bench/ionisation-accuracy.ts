@@ -20,7 +20,7 @@
 import { writeFileSync } from 'node:fs'
 import { pathToFileURL } from 'node:url'
 import { CLASS_KEYS, bestFigure, inClass, speciesClass } from '../shared/physics/best-estimate'
-import { METHODS, describeSpecies, getElement, referenceIonisationDetail, referenceIonisationEv } from '../shared/physics/index'
+import { METHODS, describeSpecies, getElement, referenceIonisationDetail, referenceIonisationEv, type ReferenceKind } from '../shared/physics/index'
 import type { ScfSpeciesEstimates } from '../shared/physics/scf/types'
 
 export interface MethodProvider {
@@ -97,8 +97,11 @@ interface Measured {
   /** NIST's stated uncertainty of the reference, percent of it (null: not stated, or the value was revised since) */
   uncertaintyPercent: number | null
   /** how ASD marks the reference value */
-  kind: 'measured' | 'semi-empirical' | 'theoretical' | null
+  kind: ReferenceKind | null
 }
+
+/** A reference NIST states to better than 1 %: precise enough to test a 3 % target. */
+const precise = (s: Measured) => s.uncertaintyPercent !== null && s.uncertaintyPercent < 1
 
 function measure(): Measured[] {
   const species: Measured[] = []
@@ -181,7 +184,6 @@ export function uncertaintyBreakdown(
   heavy: readonly Measured[],
   beyond: readonly { s: Measured; signed: number }[],
 ): string[] {
-  const precise = (s: Measured) => s.uncertaintyPercent !== null && s.uncertaintyPercent < 1
   const coarse = (s: Measured) => s.uncertaintyPercent !== null && s.uncertaintyPercent >= 1
   const unknown = (s: Measured) => s.uncertaintyPercent === null
   const count = (xs: readonly Measured[], f: (s: Measured) => boolean) => xs.filter(f).length
@@ -200,9 +202,9 @@ export function uncertaintyBreakdown(
 }
 
 /**
- * * A group of species (the heavy highly charged ions, say) by the kind of subshell the next electron leaves (the split of
- * best-estimate.ts), each kind by whether NIST states its reference to better than 1 %: whether a
- * kind's misses come from the method or from rough references.
+ * A group of species (the heavy highly charged ions, say) by the kind of subshell the next
+ * electron leaves (the split of best-estimate.ts), each kind by whether NIST states its reference
+ * to better than 1 %: whether a kind's misses come from the method or from rough references.
  */
 export function shellBreakdown(group: readonly Measured[], label: string, figures: ClassFigures): string[] {
   const lines = [`${label}, by the subshell the next electron leaves: best estimate against references stated to < 1 % | to 1 % or worse`]
@@ -214,10 +216,8 @@ export function shellBreakdown(group: readonly Measured[], label: string, figure
     return ds.length ? `${ds.length} species, mean ${mean(ds).toFixed(2)} %, ${ds.filter((d) => d > 3).length} beyond 3 %` : 'none'
   }
   for (const [kind, text] of [['sp', 's or p'], ['d', 'd'], ['f', 'f']] as const) {
-    const members = group.filter((s) => speciesClass(s.z, s.charge).key.endsWith(`-${kind}`))
-    const precise = members.filter((s) => s.uncertaintyPercent !== null && s.uncertaintyPercent < 1)
-    const rest = members.filter((s) => !precise.includes(s))
-    lines.push(`  ${text.padEnd(6)} ${part(precise).padEnd(44)} | ${part(rest)}`)
+    const members = group.filter((s) => speciesClass(s.z, s.charge).shell === kind)
+    lines.push(`  ${text.padEnd(6)} ${part(members.filter(precise)).padEnd(44)} | ${part(members.filter((s) => !precise(s)))}`)
   }
   return lines
 }

@@ -15,7 +15,11 @@ export interface SpeciesClass {
   label: string
   /** the wider class this one splits, used where this one has too few species measured */
   parent?: { key: string; label: string }
+  /** the kind of subshell the next electron leaves, for the classes split by it */
+  shell?: ShellKind
 }
+
+export type ShellKind = 'sp' | 'd' | 'f'
 
 const Z_BANDS = [
   { max: 18, key: 'light', text: 'Z ≤ 18' },
@@ -39,8 +43,9 @@ export function speciesClass(z: number, charge: number): SpeciesClass {
       : charge <= 4
         ? { key: `${band.key}-low`, label: `ions of charge 1–4, ${band.text}` }
         : { key: `${band.key}-high`, label: `ions of charge ≥ 5, ${band.text}` }
-  const shell = SHELL_KINDS[Math.min(nextElectronSubshell(z, charge)?.l ?? 0, 3)]!
-  return { key: `${parent.key}-${shell.key}`, label: `${parent.label}, ${shell.text}`, parent }
+  const l = nextElectronSubshell(z, charge)?.l ?? 0
+  const shell: ShellKind = l >= 3 ? 'f' : l === 2 ? 'd' : 'sp'
+  return { key: `${parent.key}-${shell}`, label: `${parent.label}, ${SHELL_TEXT[shell]}`, parent, shell }
 }
 
 /**
@@ -52,12 +57,11 @@ export function speciesClass(z: number, charge: number): SpeciesClass {
  * actinide ions an accuracy they do not get, and hide that the ΔSCF and eigenvalue estimates rank
  * differently for different shells.
  */
-const SHELL_KINDS = [
-  { key: 'sp', text: 'losing an s or p electron' },
-  { key: 'sp', text: 'losing an s or p electron' },
-  { key: 'd', text: 'losing a d electron' },
-  { key: 'f', text: 'losing an f electron' },
-] as const
+const SHELL_TEXT: Readonly<Record<ShellKind, string>> = {
+  sp: 'losing an s or p electron',
+  d: 'losing a d electron',
+  f: 'losing an f electron',
+}
 
 /** Every class key, in the order the bench prints them: each wide class, then its parts. */
 export const CLASS_KEYS: readonly string[] = [

@@ -34,7 +34,7 @@ export {
 export type { BindingEnergy, DescribeOptions, DiracSummary, Estimate, ReferenceConfiguration, ScreeningEntry, SpeciesRecord, TermSummary } from './record'
 export type { ScfSpeciesEstimates } from './scf/types'
 export { describeSpecies } from './record'
-export type { BestEstimate, SpeciesClass } from './best-estimate'
+export type { BestEstimate, ShellKind, SpeciesClass } from './best-estimate'
 export { bestEstimate, speciesClass } from './best-estimate'
 export type { QedCorrection } from './qed/index'
 export { formatRecord } from './record-text'

@@ -7,6 +7,7 @@
 import { type BestEstimate, bestEstimate } from './best-estimate'
 import { bindingEnergies, type BindingEnergy } from './binding'
 import type { DiracOrbital, DiracRadialDensity, ScfOrbital, ScfRadialDensity, ScfSpeciesEstimates } from './scf/types'
+import { DIRAC_METHOD_NAMES } from './scf/options'
 import type { ConfigurationRule } from './configuration'
 import { CODATA_2018, METHODS, METHOD_NAMES, type MethodName, diracHydrogenLikeEv, nuclearMass } from './methods'
 import { oneElectronEnergy, type QedCorrection } from './qed/index'
@@ -181,9 +182,8 @@ export function describeSpecies(input: string | ParsedSpecies, options: Describe
         : scf.byMethod?.[info.name]
       // a method the caller's SCF results do not cover is left out (not computed), not "not applicable"
       if (value === undefined) continue
-      // dirac-lsd-delta keeps no solution of its own, only its energy: its basis is named here
-      // (DIRAC_METHOD_NAMES.lsd of scf/dirac-scf.ts, which this module does not load)
-      const basis = info.name === 'dirac-lsd-delta' ? 'dks-lsd-spherical' : relativistic && dirac ? dirac.species.method : scf.species.method
+      // dirac-lsd-delta keeps no solution of its own, only its energy: its basis is its functional's name
+      const basis = info.name === 'dirac-lsd-delta' ? DIRAC_METHOD_NAMES.lsd : relativistic && dirac ? dirac.species.method : scf.species.method
       estimates.push(judged(info.name, species, value, referenceEv, { basis, missing, corrections: screened?.corrections }))
     }
     if (dirac) {

@@ -1,5 +1,5 @@
 import { describe, it, expect, beforeAll, afterAll } from 'vitest'
-import type { Browser } from 'playwright-core'
+import type { Browser, Page } from 'playwright-core'
 import { launch, newContext, signInAs, snap, waitForApp } from '../support/browser'
 
 let browser: Browser
@@ -107,7 +107,8 @@ describe('recording a species and linking a sample', () => {
 // typical error and show every correction; reference values NIST ASD (via Debian python3-pymatgen):
 // W⁴⁶⁺ 4057 eV, Pb⁸¹⁺ 101336.7 eV, U⁸⁹⁺ 32836.5 eV, Yb²¹⁺ 580 eV.
 describe('heavy highly charged ions', () => {
-  const lookUp = async (q: string, shot: string) => {
+  /** A scientist's look-up of `q`, once its SCF results are in (the caller closes the context). */
+  const openLookUp = async (q: string) => {
     const context = await newContext(browser)
     const page = await context.newPage()
     await signInAs(page, 'scientist')
@@ -119,12 +120,16 @@ describe('heavy highly charged ions', () => {
       await page.reload()
       await page.getByTestId('species-result').waitFor()
     }
+    return { context, page }
+  }
+  const readBest = async (page: Page) => ({ best: await page.getByTestId('best-estimate').innerText(), table: await page.getByTestId('ionisation-table').innerText() })
+  const lookUp = async (q: string, shot: string) => {
+    const { context, page } = await openLookUp(q)
     await page.waitForTimeout(300)
     await snap(page, shot)
-    const best = await page.getByTestId('best-estimate').innerText()
-    const table = await page.getByTestId('ionisation-table').innerText()
+    const read = await readBest(page)
     await context.close()
-    return { best, table }
+    return read
   }
   const bestEv = (text: string) => Number(/Best estimate\s+([\d,.\s]+?)\s*eV/.exec(text)![1]!.replace(/[,\s]/g, ''))
 
@@ -157,27 +162,20 @@ describe('heavy highly charged ions', () => {
   })
 
   it('Yb21+ shows the configuration chosen by energy and an estimate within 3 % of the reference', async () => {
-    const context = await newContext(browser)
-    const page = await context.newPage()
-    await signInAs(page, 'scientist')
-    await page.goto('/species?q=' + encodeURIComponent('Yb21+'))
-    await page.getByTestId('species-result').waitFor()
+    const { context, page } = await openLookUp('Yb21+')
     // NIST ASD gives Yb XXII the ground shells 4d10 4f3 (GSIE, as exported in tardis-sn/carsus-data-nist)
     await expect(page.getByTestId('core-configuration').innerText()).resolves.toBe('[Kr] 4d10 4f3')
     await expect(page.getByTestId('configuration-source').innerText()).resolves.toMatch(/Chosen by energy/)
+    await snap(page, 'species-yb21')
+    const { best } = await readBest(page)
     await context.close()
-    const { best } = await lookUp('Yb21+', 'species-yb21')
     expect(Math.abs(bestEv(best) / 580 - 1)).toBeLessThan(0.03)
   })
 
   // NIST ASD 5.12 (ground states and ionization energies export): Yb XII [Cd] 4f11 4I°15/2,
   // (244) ± 12 eV, a theoretical value; W XVI [Cd] 4f11, [361.9] ± 1.5 eV, semi-empirical.
   it('Yb11+ shows the reference\'s stated uncertainty and ASD\'s ground shells beside the engine\'s', async () => {
-    const context = await newContext(browser)
-    const page = await context.newPage()
-    await signInAs(page, 'scientist')
-    await page.goto('/species?q=' + encodeURIComponent('Yb11+'))
-    await page.getByTestId('species-result').waitFor()
+    const { context, page } = await openLookUp('Yb11+')
     await expect(page.getByTestId('reference-uncertainty').innerText()).resolves.toMatch(/Theoretical value, stated uncertainty ±12 eV \(4\.9 %\)\. Deviations smaller than that do not tell the methods apart\./)
     await expect(page.getByTestId('reference-configuration').innerText()).resolves.toMatch(/NIST ASD lists \[Cd\] 4f11 \(4I°15\/2\) as the ground shells of this ion; the engine's configuration differs/)
     await snap(page, 'species-yb11-reference')

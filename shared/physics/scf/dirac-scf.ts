@@ -13,7 +13,7 @@ import { createField } from './field'
 import { makeLogGrid, type RadialGrid } from './grid'
 import { iterate, type OrbitalProblem } from './iteration'
 import { nuclearPotential, sphereRadiusBohr } from './nucleus'
-import type { ScfFunctional, ScfOptions } from './options'
+import { DIRAC_METHOD_NAMES, type ScfFunctional, type ScfOptions } from './options'
 import { startingPotential } from './potential'
 import { defaultRMax } from './scf'
 
@@ -32,11 +32,7 @@ export interface DiracOptions extends ScfOptions {
   relativisticExchange?: boolean
 }
 
-export const DIRAC_METHOD_NAMES: Record<ScfFunctional, string> = {
-  'lsd-sic': 'dks-lsd-sic-spherical',
-  lsd: 'dks-lsd-spherical',
-  lda: 'dks-lda-spherical',
-}
+export { DIRAC_METHOD_NAMES }
 
 export interface DiracSolution {
   channel: DiracChannel

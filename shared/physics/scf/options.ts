@@ -14,6 +14,13 @@ export const METHOD_NAMES: Record<ScfFunctional, string> = {
   lda: 'lda-spherical',
 }
 
+/** The same for the relativistic (Dirac–Kohn–Sham) solver, in DiracResult.method. */
+export const DIRAC_METHOD_NAMES: Record<ScfFunctional, string> = {
+  'lsd-sic': 'dks-lsd-sic-spherical',
+  lsd: 'dks-lsd-spherical',
+  lda: 'dks-lda-spherical',
+}
+
 export interface ScfOptions {
   functional?: ScfFunctional
   /** SCF iterations before giving up (default 120) */

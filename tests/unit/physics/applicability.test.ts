@@ -79,6 +79,7 @@ describe('the best estimate', () => {
       key: 'heavy-low-f',
       label: 'ions of charge 1–4, Z ≥ 55, losing an f electron',
       parent: { key: 'heavy-low', label: 'ions of charge 1–4, Z ≥ 55' },
+      shell: 'f',
     })
     expect(speciesClass(74, 5).key).toBe('heavy-high-d')
     expect(speciesClass(54, 8).key).toBe('medium-high-d')
