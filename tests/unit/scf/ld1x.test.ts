@@ -66,6 +66,39 @@ describe.skipIf(!present)('Dirac LDA eigenvalues against ld1.x (Quantum ESPRESSO
   })
 })
 
+function ld1TotalEv(title: string, z: number, configuration: string): number {
+  const input = `&input\n title='${title}', zed=${z}., config='${configuration}', iswitch=1, rel=2, dft='SLA-VWN', beta=0.2, tr2=1e-12\n/\n`
+  const out = execFileSync(LD1, [], { input, cwd: work, encoding: 'utf8', timeout: 60_000 })
+  const m = /Etot\s*=\s*(-?[\d.]+)\s*Ry/.exec(out)
+  if (!m) throw new Error(`ld1.x printed no total energy for ${title}`)
+  return Number(m[1]) * RY_EV
+}
+
+// ΔSCF: the ionisation energy as a difference of two total energies, both codes with the settings
+// above. These three are where the engine's estimate and NIST ASD disagree most: the 4f removals of
+// the 60-electron ions U³²⁺ and Fm⁴⁰⁺ (ASD 5.12: 1210 ± 60 eV and 1770 ± 90 eV, theoretical
+// estimates) and the 5d removal of Hg⁵⁺ (ASD 5.12: 76.6 ± 0.5 eV, measured). The two solvers agree
+// to better than 1e-5 here, so those gaps belong to the local-density approximation itself (or to
+// the reference), not to how the engine solves it.
+const DELTA_CASES: Array<[string, number, string, string]> = [
+  ['U32+ (4f removal)', 92, '[Kr] 4d10 4f14', '[Kr] 4d10 4f13'],
+  ['Fm40+ (4f removal)', 100, '[Kr] 4d10 4f14', '[Kr] 4d10 4f13'],
+  ['Hg5+ (5d removal)', 80, '[Xe] 4f14 5d7', '[Xe] 4f14 5d6'],
+]
+
+describe.skipIf(!present)('Dirac LDA ΔSCF ionisation energies against ld1.x total energies, 1e-5 relative', () => {
+  it.each(DELTA_CASES)('%s', (title, z, before, after) => {
+    const total = (configuration: string) => {
+      const run = runDirac(z, parseConfiguration(expand(configuration)), { functional: 'lda', nucleus: 'point', jSplit: 'jj', relativisticExchange: false, gridStep: 0.02, densityPoints: 0 })
+      expect(run.converged).toBe(true)
+      return run.totalEnergy * 2 * RY_EV
+    }
+    const ours = total(after) - total(before)
+    const theirs = ld1TotalEv(title, z, expand(after)) - ld1TotalEv(title, z, expand(before))
+    expect(Math.abs(ours / theirs - 1)).toBeLessThan(1e-5)
+  })
+})
+
 if (!present) {
   describe('ld1.x comparison', () => {
     it.skip(`skipped: ${LD1} is not installed (apt-get install quantum-espresso; npm test installs it)`, () => {})
