@@ -1,6 +1,6 @@
 /**
  * A second opinion from outside the local-density approximation: the Hartree–Fock ΔSCF ionisation
- * energy of closed-shell ions, computed by NWChem, beside the engine's Dirac–Kohn–Sham ΔSCF and
+ * energy of an ion, computed by NWChem, beside the engine's Dirac–Kohn–Sham ΔSCF and
  * NIST ASD's value.
  *
  *   tsx scripts/reference/hartree-fock-oracle.ts [--dkh] [Fm40+ Th30+ …]
@@ -11,8 +11,9 @@
  * the engine's solve of the same physics; this checks the physics.
  *
  * How: NWChem (Debian package nwchem; E. Aprà et al., J. Chem. Phys. 152, 184102, 2020) solves the
- * ion as a closed-shell restricted Hartree–Fock determinant and the next ion, one electron fewer,
- * as an unrestricted one, both in the uncontracted universal Gaussian basis (UGBS: E. V. R. de
+ * ion and the next one, one electron fewer, in the engine's ground configurations: a closed shell
+ * as a restricted Hartree–Fock determinant, an open one as an unrestricted high-spin one (so it
+ * compares with the engine's spin-polarised LSD, not with a level), both in the uncontracted universal Gaussian basis (UGBS: E. V. R. de
  * Castro and F. E. Jorge, J. Chem. Phys. 108, 5225, 1998, as NWChem's library carries it), without
  * relativity or, with --dkh, with the scalar second-order Douglas–Kroll–Hess Hamiltonian (no
  * spin–orbit coupling: compare it with the engine's 'statistical' j split, which shares the hole
@@ -37,7 +38,18 @@ const dkh = args.includes('--dkh')
 const inputs = args.filter((a) => !a.startsWith('--'))
 const ions = inputs.length ? inputs : ['Fm40+']
 
-function hartreeFock(symbol: string, charge: number, open: boolean, work: string): number {
+const MULTIPLICITY = ['singlet', 'doublet', 'triplet', 'quartet', 'quintet', 'sextet', 'septet', 'octet']
+
+/** Unpaired electrons of the engine's ground configuration with every open subshell high-spin (Hund's first rule). */
+function unpaired(z: number, charge: number): number {
+  return groundConfiguration(z, charge).subshells.reduce((n, s) => n + Math.min(s.electrons, capacity(s.l) - s.electrons), 0)
+}
+
+/** NWChem's total energy of (symbol, charge), hartree: closed shells restricted, open ones unrestricted high-spin. */
+function hartreeFock(z: number, symbol: string, charge: number, work: string): number {
+  const spins = unpaired(z, charge)
+  const open = spins > 0
+  if (spins >= MULTIPLICITY.length) throw new Error(`${symbol}${charge}+: ${spins} unpaired electrons, more than this script names`)
   const name = `${symbol}${charge}`
   const dir = path.join(work, name)
   const input = [
@@ -52,7 +64,7 @@ function hartreeFock(symbol: string, charge: number, open: boolean, work: string
     `  ${symbol} library ugbs`,
     'end',
     'scf',
-    open ? '  doublet\n  uhf' : '  singlet\n  rhf',
+    `  ${MULTIPLICITY[spins]}\n  ${open ? 'uhf' : 'rhf'}`,
     '  maxiter 60',
     // NWChem's unrestricted solve of a heavy one-hole ion stalls near an orbital gradient of 1e-3,
     // where the energy has settled to about 1e-6 hartree (it is quadratic in the gradient)
@@ -93,19 +105,18 @@ try {
   for (const text of ions) {
     const { z, charge } = parseSpecies(text)
     const symbol = getElement(z)!.symbol
-    const configuration = groundConfiguration(z, charge)
-    if (configuration.subshells.some((s) => s.electrons !== capacity(s.l))) {
-      throw new Error(`${text}: only closed-shell ions (the next ion then has one hole), not ${configuration.core}`)
-    }
-    const hf = (hartreeFock(symbol, charge + 1, true, work) - hartreeFock(symbol, charge, false, work)) * HARTREE_EV
+    const closed = unpaired(z, charge) === 0
+    const hf = (hartreeFock(z, symbol, charge + 1, work) - hartreeFock(z, symbol, charge, work)) * HARTREE_EV
+    // like with like: spin-restricted LDA for a closed-shell ion, spin-polarised LSD for an open one
+    const functional = closed ? 'lda' : 'lsd'
     const engine = dkh
-      ? solveSpeciesDirac(z, charge, { functional: 'lda', jSplit: 'statistical', densityPoints: 0 }).deltaEv
-      : solveSpeciesScf(z, charge, { functional: 'lda', densityPoints: 0 }).deltaEv
+      ? solveSpeciesDirac(z, charge, { functional, jSplit: 'statistical', densityPoints: 0 }).deltaEv
+      : solveSpeciesScf(z, charge, { functional, densityPoints: 0 }).deltaEv
     const ref = referenceIonisationEv(z, charge)
     const u = referenceIonisationDetail(z, charge)?.uncertaintyEv
     const pct = (x: number | null) => (x === null || ref === null ? '—' : `${(((x - ref) / ref) * 100).toFixed(2)} %`)
     console.log(
-      `${text.padEnd(8)} HF ${hf.toFixed(2)} (${pct(hf)})   engine ${dkh ? 'Dirac LDA, statistical j split' : 'LDA'} ${engine?.toFixed(2) ?? '—'} (${pct(engine)})   NIST ${ref ?? '—'}${u ? ` ± ${u}` : ''}`,
+      `${text.padEnd(8)} HF ${hf.toFixed(2)} (${pct(hf)})   engine ${dkh ? 'Dirac ' : ''}${functional.toUpperCase()}${dkh ? ', statistical j split' : ''} ${engine?.toFixed(2) ?? '—'} (${pct(engine)})   NIST ${ref ?? '—'}${u ? ` ± ${u}` : ''}`,
     )
   }
 } finally {

@@ -26,9 +26,14 @@ afterAll(() => {
   if (work) rmSync(work, { recursive: true, force: true })
 })
 
-function ld1(title: string, z: number, configuration: string): Map<string, number> {
+/** ld1.x's printed output for one all-electron Dirac LDA atom or ion. */
+function runLd1(title: string, z: number, configuration: string): string {
   const input = `&input\n title='${title}', zed=${z}., config='${configuration}', iswitch=1, rel=2, dft='SLA-VWN', beta=0.2, tr2=1e-12\n/\n`
-  const out = execFileSync(LD1, [], { input, cwd: work, encoding: 'utf8', timeout: 60_000 })
+  return execFileSync(LD1, [], { input, cwd: work, encoding: 'utf8', timeout: 60_000 })
+}
+
+function ld1(title: string, z: number, configuration: string): Map<string, number> {
+  const out = runLd1(title, z, configuration)
   const block = out.split('Spin orbit split results')[1]?.split('Averaged results')[0] ?? ''
   const levels = new Map<string, number>()
   for (const m of block.matchAll(/^\s*(\d+)\s+(\d+)\s+(\d\.5)\s+\S+\s+\d\(\s*([\d.]+)\)\s+(-?[\d.]+)\s+(-?[\d.]+)\s+(-?[\d.]+)/gm)) {
@@ -37,6 +42,9 @@ function ld1(title: string, z: number, configuration: string): Map<string, numbe
   }
   return levels
 }
+
+/** The engine's solver set up as ld1.x solves (see the header). */
+const LIKE_LD1 = { functional: 'lda', nucleus: 'point', jSplit: 'jj', relativisticExchange: false, gridStep: 0.02, densityPoints: 0 } as const
 
 const CASES: Array<[string, number, string, string]> = [
   ['Ar', 18, '[Ne] 3s2 3p6', '[Ne] 3s2 3p6'],
@@ -58,7 +66,7 @@ const expand = (c: string) => c.replace(/\[\w+\]/, (core) => NOBLE[core])
 describe.skipIf(!present)('Dirac LDA eigenvalues against ld1.x (Quantum ESPRESSO), 1e-4 relative', () => {
   it.each(CASES)('%s', (title, z, ours, theirs) => {
     const reference = ld1(title, z, expand(theirs))
-    const run = runDirac(z, parseConfiguration(expand(ours)), { functional: 'lda', nucleus: 'point', jSplit: 'jj', relativisticExchange: false, gridStep: 0.02, densityPoints: 0 })
+    const run = runDirac(z, parseConfiguration(expand(ours)), LIKE_LD1)
     expect(run.converged).toBe(true)
     const mine = new Map(run.solutions.map((s) => [`${s.channel.n},${s.channel.l},${s.channel.twoJ}`, s.energy]))
     expect([...mine.keys()].sort()).toEqual([...reference.keys()].sort())
@@ -67,9 +75,7 @@ describe.skipIf(!present)('Dirac LDA eigenvalues against ld1.x (Quantum ESPRESSO
 })
 
 function ld1TotalEv(title: string, z: number, configuration: string): number {
-  const input = `&input\n title='${title}', zed=${z}., config='${configuration}', iswitch=1, rel=2, dft='SLA-VWN', beta=0.2, tr2=1e-12\n/\n`
-  const out = execFileSync(LD1, [], { input, cwd: work, encoding: 'utf8', timeout: 60_000 })
-  const m = /Etot\s*=\s*(-?[\d.]+)\s*Ry/.exec(out)
+  const m = /Etot\s*=\s*(-?[\d.]+)\s*Ry/.exec(runLd1(title, z, configuration))
   if (!m) throw new Error(`ld1.x printed no total energy for ${title}`)
   return Number(m[1]) * RY_EV
 }
@@ -89,7 +95,7 @@ const DELTA_CASES: Array<[string, number, string, string]> = [
 describe.skipIf(!present)('Dirac LDA ΔSCF ionisation energies against ld1.x total energies, 1e-5 relative', () => {
   it.each(DELTA_CASES)('%s', (title, z, before, after) => {
     const total = (configuration: string) => {
-      const run = runDirac(z, parseConfiguration(expand(configuration)), { functional: 'lda', nucleus: 'point', jSplit: 'jj', relativisticExchange: false, gridStep: 0.02, densityPoints: 0 })
+      const run = runDirac(z, parseConfiguration(expand(configuration)), LIKE_LD1)
       expect(run.converged).toBe(true)
       return run.totalEnergy * 2 * RY_EV
     }
