@@ -11,21 +11,23 @@
  * the engine's solve of the same physics; this checks the physics.
  *
  * How: NWChem (Debian package nwchem; E. Aprà et al., J. Chem. Phys. 152, 184102, 2020) solves the
- * ion and the next one, one electron fewer, in the engine's ground configurations: a closed shell
- * as a restricted Hartree–Fock determinant, an open one as an unrestricted high-spin one (so it
- * compares with the engine's spin-polarised LSD, not with a level), both in the uncontracted universal Gaussian basis (UGBS: E. V. R. de
- * Castro and F. E. Jorge, J. Chem. Phys. 108, 5225, 1998, as NWChem's library carries it), without
+ * ion and the next one, one electron fewer, with the spin of the engine's ground configurations: a
+ * closed shell as a restricted Hartree–Fock determinant, an open one as an unrestricted high-spin
+ * one (so it compares with the engine's spin-polarised LSD, not with a level). NWChem is told the
+ * charge and the spin only and finds its own lowest orbitals: where two configurations of the
+ * next ion lie within a few eV (Pt¹⁷⁺: 4f13 5s2 and 4f14 5s), it may land in the other one. Both
+ * in the uncontracted universal Gaussian basis (UGBS: E. V. R. de Castro and F. E. Jorge,
+ * J. Chem. Phys. 108, 5225, 1998, as NWChem's library carries it), without
  * relativity or, with --dkh, with the scalar second-order Douglas–Kroll–Hess Hamiltonian (no
  * spin–orbit coupling: compare it with the engine's 'statistical' j split, which shares the hole
  * between j = l ∓ ½ by 2j + 1). Each ion takes a few minutes on one core; the test script does not
  * install NWChem or run this (apt-get install nwchem first).
  */
 import { execFileSync } from 'node:child_process'
-import { existsSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs'
+import { existsSync, mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs'
 import os from 'node:os'
 import path from 'node:path'
-import { getElement, groundConfiguration, parseSpecies, referenceIonisationDetail, referenceIonisationEv } from '../../shared/physics/index'
-import { capacity } from '../../shared/physics/subshells'
+import { getElement, groundConfiguration, parseSpecies, referenceIonisationDetail, referenceIonisationEv, unpairedElectrons } from '../../shared/physics/index'
 import { HARTREE_EV, solveSpeciesDirac, solveSpeciesScf } from '../../shared/physics/scf/index'
 
 const NWCHEM = '/usr/bin/nwchem'
@@ -40,10 +42,8 @@ const ions = inputs.length ? inputs : ['Fm40+']
 
 const MULTIPLICITY = ['singlet', 'doublet', 'triplet', 'quartet', 'quintet', 'sextet', 'septet', 'octet']
 
-/** Unpaired electrons of the engine's ground configuration with every open subshell high-spin (Hund's first rule). */
-function unpaired(z: number, charge: number): number {
-  return groundConfiguration(z, charge).subshells.reduce((n, s) => n + Math.min(s.electrons, capacity(s.l) - s.electrons), 0)
-}
+/** Unpaired electrons of the engine's ground configuration, every open subshell high-spin (the record's own count). */
+const unpaired = (z: number, charge: number) => unpairedElectrons(groundConfiguration(z, charge).subshells)
 
 /** NWChem's total energy of (symbol, charge), hartree: closed shells restricted, open ones unrestricted high-spin. */
 function hartreeFock(z: number, symbol: string, charge: number, work: string): number {
@@ -76,7 +76,7 @@ function hartreeFock(z: number, symbol: string, charge: number, work: string): n
   ].join('\n')
   const file = path.join(work, `${name}.nw`)
   writeFileSync(file, input)
-  execFileSync('mkdir', ['-p', dir])
+  mkdirSync(dir, { recursive: true })
   let out = ''
   try {
     out = execFileSync(NWCHEM, [file], {
