@@ -316,10 +316,17 @@ async function addScfProviders(workers: number): Promise<void> {
 
 if (import.meta.url === pathToFileURL(process.argv[1] ?? '').href) {
   // --no-scf leaves out the SCF methods (the closed-form table alone takes a second).
+  // --dump FILE also writes the per-species deviations (see below).
   // Only a full run writes the class figures: without the SCF methods they would drop out of it.
   const full = !process.argv.includes('--no-scf')
   if (full) await addScfProviders(2)
   const { figures } = runAccuracyBench()
+  // --dump FILE: every species' signed deviation by method, as JSON, for looking at other class splits
+  const dump = process.argv.indexOf('--dump')
+  if (dump > 0 && process.argv[dump + 1]) {
+    const rows = measure().map((s) => ({ ...s, byMethod: undefined, signed: Object.fromEntries(s.signed) }))
+    writeFileSync(process.argv[dump + 1], JSON.stringify(rows))
+  }
   if (full || process.argv.includes('--write')) {
     writeClassFigures(figures)
     process.stdout.write('\nwrote shared/physics/data/best-estimate-classes.ts\n')

@@ -16,6 +16,7 @@ export const METHOD_COLOURS: Readonly<Record<string, string>> = {
   'dirac-scf-eigenvalue': '#c2410c',
   'dirac-lsd-delta': '#65a30d',
   'dirac-scf-delta-qed': '#4f46e5',
+  'hf-delta': '#a21caf',
 }
 export const REFERENCE_COLOUR = '#0f172a'
 const OTHER_COLOUR = '#64748b'

@@ -13,9 +13,11 @@
  */
 import { groundConfiguration } from '../configuration'
 import { getElement } from '../elements'
+import { METHODS, methodDomainReason } from '../methods'
 import type { DiracOptions } from './dirac-scf'
 import { diracSpeciesEstimates } from './dirac-species'
 import type { SubshellOccupation } from './channels'
+import { hartreeFockDelta } from './hf-species'
 import { METHOD_NAMES, type ScfOptions } from './options'
 import { toResult } from './result'
 import { runScf } from './scf'
@@ -29,6 +31,8 @@ export { DIRAC_METHOD_NAMES, runDirac } from './dirac-scf'
 export type { ScfFunctional, ScfOptions } from './options'
 export type { ConfigurationSource, ScfSpeciesOptions } from './species'
 export { HARTREE_EV } from './species'
+
+const HF_DELTA = METHODS.find((m) => m.name === 'hf-delta')!
 
 /** The production method's name as shown to users. */
 export const SCF_METHOD: string = METHOD_NAMES['lsd-sic']
@@ -57,10 +61,21 @@ export function solveSpeciesDirac(z: number, charge: number, options: DiracOptio
 
 /**
  * Both solvers for one species, as the cache stores them: the non-relativistic estimates with
- * `dirac` beside, and the relativistic ΔSCF without the self-interaction correction
- * (`dirac-lsd-delta`, a total-energy difference only: no densities are kept for it).
+ * `dirac` beside, the relativistic ΔSCF without the self-interaction correction
+ * (`dirac-lsd-delta`, a total-energy difference only: no densities are kept for it) and the
+ * Hartree–Fock ΔSCF on local-density orbitals with its relativistic shift (`hf-delta`, hf-species.ts).
  */
 export function solveSpeciesAll(z: number, charge: number, options: ScfSpeciesOptions = {}): ScfSpeciesEstimates {
   const lsd = solveSpeciesDirac(z, charge, { ...options, functional: 'lsd', densityPoints: 0 })
-  return { ...solveSpeciesScf(z, charge, options), dirac: solveSpeciesDirac(z, charge, options), byMethod: { 'dirac-lsd-delta': lsd.deltaEv } }
+  // hf-delta only where its domain says (charge ≥ 5): elsewhere the record gives the reason
+  const hf = methodDomainReason(HF_DELTA, z, charge, z - charge)
+    ? null
+    : hartreeFockDelta(z, charge, options.configurationOf ?? groundConfiguration, () =>
+        solveSpeciesDirac(z, charge, { ...options, functional: 'lda', densityPoints: 0 }).deltaEv,
+      ).eV
+  return {
+    ...solveSpeciesScf(z, charge, options),
+    dirac: solveSpeciesDirac(z, charge, options),
+    byMethod: { 'dirac-lsd-delta': lsd.deltaEv, 'hf-delta': hf },
+  }
 }

@@ -33,6 +33,7 @@ describe('constants', () => {
       'dirac-scf-eigenvalue',
       'dirac-lsd-delta',
       'dirac-scf-delta-qed',
+      'hf-delta',
     ])
     for (const m of METHODS) {
       expect(m.description.length).toBeGreaterThan(20)
