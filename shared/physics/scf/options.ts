@@ -34,3 +34,10 @@ export interface ScfOptions {
   /** points of the coarse radial-density table; 0 leaves it out (default 80) */
   densityPoints?: number
 }
+
+/**
+ * What hf-delta's number rests on (scf/hf-species.ts), as the record's basis: the Hartree–Fock
+ * determinant energy on spin-restricted local-density orbitals, with the relativistic shift of the
+ * spin-restricted Dirac–Kohn–Sham ΔSCF.
+ */
+export const HF_DELTA_BASIS = `hartree-fock determinant on ${METHOD_NAMES.lda} orbitals + ${DIRAC_METHOD_NAMES.lda} shift`

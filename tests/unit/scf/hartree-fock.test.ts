@@ -128,6 +128,9 @@ describe('hf-delta', () => {
       expect(all.byMethod!['hf-delta']! / referenceIonisationEv(80, q)! - 1).toBeCloseTo(hartreeFockDelta(80, q, groundConfiguration, relativistic(80, q)).eV! / referenceIonisationEv(80, q)! - 1, 9)
       expect(all.byMethod!['dirac-lsd-delta']! / referenceIonisationEv(80, q)! - 1).toBeGreaterThan(0.03)
     }
+    // the record names what the number rests on, not the self-interaction-corrected solution's method
+    const hg5 = describeSpecies('Hg5+', { scf: solveSpeciesAll(80, 5, { densityPoints: 0 }) })
+    expect(hg5.ionisationEnergy.estimates.find((e) => e.method === 'hf-delta')?.basis).toBe('hartree-fock determinant on lda-spherical orbitals + dks-lda-spherical shift')
     // below charge 5 the record gives no number but the reason (its missing correlation energy)
     const hg4 = describeSpecies('Hg4+', { scf: solveSpeciesAll(80, 4, { densityPoints: 0 }) })
     expect(hg4.ionisationEnergy.estimates.find((e) => e.method === 'hf-delta')).toMatchObject({ eV: null, notApplicable: expect.stringMatching(/charge ≥ 5 only: .*correlation/) })
