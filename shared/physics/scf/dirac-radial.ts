@@ -73,8 +73,10 @@ export function solveDiracState(
 
   let eLo = Infinity
   for (let i = 0; i < size; i++) eLo = Math.min(eLo, v[i] + centrifugal / (r[i] * r[i]))
-  // the Dirac levels lie slightly below the Schrödinger bound for the same potential
-  eLo = eLo < 0 ? eLo * 1.5 - 1 : eLo - 1
+  // the Dirac levels lie slightly below the Schrödinger bound for the same potential, and every
+  // bound level above the lower continuum, E > −mc² (e > −2c² without the rest energy): below it the
+  // inward start has no decaying solution, and bisecting there lost the level for Z ≥ 113
+  eLo = Math.max(eLo < 0 ? eLo * 1.5 - 1 : eLo - 1, -c2)
   let eHi = v[size - 1] + centrifugal / (r[size - 1] * r[size - 1])
   if (!(eLo < eHi)) return `no room for a bound ${n},κ=${kappa} state below the potential at the grid edge`
   const split = () => (eHi < 0 ? -Math.sqrt(eLo * eHi) : 0.5 * (eLo + eHi))
