@@ -17,6 +17,7 @@ export const METHOD_COLOURS: Readonly<Record<string, string>> = {
   'dirac-lsd-delta': '#65a30d',
   'dirac-scf-delta-qed': '#4f46e5',
   'hf-delta': '#a21caf',
+  'hf-correlated-delta': '#be123c',
 }
 export const REFERENCE_COLOUR = '#0f172a'
 const OTHER_COLOUR = '#64748b'

@@ -140,7 +140,7 @@ describe('the recorded-species list', () => {
     expect(ar[10]).toMatch(/NIST ASD/)
     // the record's best estimate: a positive model value near the reference, with the method named
     expect(Math.abs(Number(ar[11]) - 422.6) / 422.6).toBeLessThan(0.25)
-    expect(ar[12]).toMatch(/^(hf-delta|dirac-lsd-delta|dirac-scf-eigenvalue|dirac-scf-delta|scf-eigenvalue|scf-delta|slater-total-energy)$/)
+    expect(ar[12]).toMatch(/^(hf-delta|hf-correlated-delta|dirac-lsd-delta|dirac-scf-eigenvalue|dirac-scf-delta|scf-eigenvalue|scf-delta|slater-total-energy)$/)
   })
 })
 

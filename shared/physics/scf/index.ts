@@ -33,6 +33,7 @@ export type { ConfigurationSource, ScfSpeciesOptions } from './species'
 export { HARTREE_EV } from './species'
 
 const HF_DELTA = METHODS.find((m) => m.name === 'hf-delta')!
+const HF_CORRELATED = METHODS.find((m) => m.name === 'hf-correlated-delta')!
 
 /** The production method's name as shown to users. */
 export const SCF_METHOD: string = METHOD_NAMES['lsd-sic']
@@ -63,19 +64,29 @@ export function solveSpeciesDirac(z: number, charge: number, options: DiracOptio
  * Both solvers for one species, as the cache stores them: the non-relativistic estimates with
  * `dirac` beside, the relativistic ΔSCF without the self-interaction correction
  * (`dirac-lsd-delta`, a total-energy difference only: no densities are kept for it) and the
- * Hartree–Fock ΔSCF on local-density orbitals with its relativistic shift (`hf-delta`, hf-species.ts).
+ * Hartree–Fock ΔSCF on local-density orbitals with its relativistic shift, without and with local
+ * correlation (`hf-delta`, `hf-correlated-delta`, hf-species.ts).
  */
 export function solveSpeciesAll(z: number, charge: number, options: ScfSpeciesOptions = {}): ScfSpeciesEstimates {
   const lsd = solveSpeciesDirac(z, charge, { ...options, functional: 'lsd', densityPoints: 0 })
-  // hf-delta only where its domain says (charge ≥ 5): elsewhere the record gives the reason
-  const hf = methodDomainReason(HF_DELTA, z, charge, z - charge)
-    ? null
-    : hartreeFockDelta(z, charge, options.configurationOf ?? groundConfiguration, () =>
-        solveSpeciesDirac(z, charge, { ...options, functional: 'lda', densityPoints: 0 }).deltaEv,
-      ).eV
+  // the Hartree–Fock methods only where their domains say: elsewhere the record gives the reason
+  const electrons = z - charge
+  const exchangeOnly = !methodDomainReason(HF_DELTA, z, charge, electrons)
+  const correlated = !methodDomainReason(HF_CORRELATED, z, charge, electrons)
+  const hf =
+    exchangeOnly || correlated
+      ? hartreeFockDelta(z, charge, options.configurationOf ?? groundConfiguration, () =>
+          solveSpeciesDirac(z, charge, { ...options, functional: 'lda', densityPoints: 0 }).deltaEv,
+        )
+      : null
+  const withCorrelation = hf?.eV != null && hf.correlationEv !== undefined ? hf.eV + hf.correlationEv : null
   return {
     ...solveSpeciesScf(z, charge, options),
     dirac: solveSpeciesDirac(z, charge, options),
-    byMethod: { 'dirac-lsd-delta': lsd.deltaEv, 'hf-delta': hf },
+    byMethod: {
+      'dirac-lsd-delta': lsd.deltaEv,
+      'hf-delta': exchangeOnly ? hf!.eV : null,
+      'hf-correlated-delta': correlated ? withCorrelation : null,
+    },
   }
 }

@@ -41,3 +41,6 @@ export interface ScfOptions {
  * spin-restricted Dirac–Kohn–Sham ΔSCF.
  */
 export const HF_DELTA_BASIS = `hartree-fock determinant on ${METHOD_NAMES.lda} orbitals + ${DIRAC_METHOD_NAMES.lda} shift`
+
+/** The same for hf-correlated-delta: the determinant energy plus the local correlation energy. */
+export const HF_CORRELATED_BASIS = `hartree-fock determinant + vwn correlation on ${METHOD_NAMES.lda} orbitals + ${DIRAC_METHOD_NAMES.lda} shift`

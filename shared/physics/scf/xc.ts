@@ -121,6 +121,24 @@ export function lsdOnGrid(
 }
 
 /**
+ * The correlation part alone of the local spin-density energy, ∫ 4πr² ρ·ε_c dr (hartree), for spin
+ * densities given as p_σ = 4πr²ρ_σ: what hf-species.ts adds to a Hartree–Fock energy.
+ */
+export function lsdCorrelationOnGrid(r: Float64Array, dr: Float64Array, pUp: Float64Array, pDown: Float64Array): number {
+  const out = new Float64Array(3)
+  const tmp = new Float64Array(6)
+  let energy = 0
+  for (let i = 0; i < r.length; i++) {
+    const shell = 4 * Math.PI * r[i] * r[i]
+    const up = Math.max(0, pUp[i]) / shell
+    const down = Math.max(0, pDown[i]) / shell
+    lsdPoint(up, down, out, tmp)
+    energy += dr[i] * shell * (out[0] - CX * (up * Math.cbrt(up) + down * Math.cbrt(down)))
+  }
+  return energy
+}
+
+/**
  * The same for a fully spin-polarised density p = 4πr²ρ↑ (ρ↓ = 0) over [0, end), the case of every
  * self-interaction term: only the ferromagnetic fit is needed, so it is written out here. Fills
  * the spin-up potential v and returns the energy.

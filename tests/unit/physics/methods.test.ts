@@ -34,6 +34,7 @@ describe('constants', () => {
       'dirac-lsd-delta',
       'dirac-scf-delta-qed',
       'hf-delta',
+      'hf-correlated-delta',
     ])
     for (const m of METHODS) {
       expect(m.description.length).toBeGreaterThan(20)
