@@ -222,7 +222,7 @@ export function shellBreakdown(group: readonly Measured[], label: string, figure
   return lines
 }
 
-/** Computes and prints the table; returns the deviations by method and group label, and the class figures. */
+/** Computes and prints the table; returns the deviations by method and group label, the class figures and the species measured. */
 export function runAccuracyBench(out: (line: string) => void = (l) => process.stdout.write(`${l}\n`)) {
   const species = measure()
   const figures = classFigures(species)
@@ -281,7 +281,7 @@ export function runAccuracyBench(out: (line: string) => void = (l) => process.st
     const [best] = figures[key] ?? []
     out(`  ${key.padEnd(18)} ${best ? `${best[0]}  ±${best[1]} % (${best[2]})` : '—'}`)
   }
-  return { results, figures }
+  return { results, figures, species }
 }
 
 /**
@@ -320,11 +320,11 @@ if (import.meta.url === pathToFileURL(process.argv[1] ?? '').href) {
   // Only a full run writes the class figures: without the SCF methods they would drop out of it.
   const full = !process.argv.includes('--no-scf')
   if (full) await addScfProviders(2)
-  const { figures } = runAccuracyBench()
+  const { figures, species } = runAccuracyBench()
   // --dump FILE: every species' signed deviation by method, as JSON, for looking at other class splits
   const dump = process.argv.indexOf('--dump')
   if (dump > 0 && process.argv[dump + 1]) {
-    const rows = measure().map((s) => ({ ...s, byMethod: undefined, signed: Object.fromEntries(s.signed) }))
+    const rows = species.map((s) => ({ ...s, byMethod: undefined, signed: Object.fromEntries(s.signed) }))
     writeFileSync(process.argv[dump + 1], JSON.stringify(rows))
   }
   if (full || process.argv.includes('--write')) {

@@ -41,7 +41,8 @@ const CHARGE_GROUPS = {
   low: { key: 'low', text: 'ions of charge 1–4' },
   high: { key: 'high', text: 'ions of charge ≥ 5' },
   mid: { key: 'mid', text: 'ions of charge 5–9' },
-  ten: { key: 'high', text: 'ions of charge ≥ 10' },
+  // keeps the key of the whole group, so the f classes and the q ≥ 10 ones read alike
+  fromTen: { key: 'high', text: 'ions of charge ≥ 10' },
 } as const
 
 /**
@@ -58,7 +59,7 @@ export function speciesClass(z: number, charge: number): SpeciesClass {
   const parent = { key: `${band.key}-${group.key}`, label: `${group.text}, ${band.text}` }
   const l = nextElectronSubshell(z, charge)?.l ?? 0
   const shell: ShellKind = l >= 3 ? 'f' : l === 2 ? 'd' : 'sp'
-  const own = group === CHARGE_GROUPS.high && shell !== 'f' ? (charge <= 9 ? CHARGE_GROUPS.mid : CHARGE_GROUPS.ten) : group
+  const own = group === CHARGE_GROUPS.high && shell !== 'f' ? (charge <= 9 ? CHARGE_GROUPS.mid : CHARGE_GROUPS.fromTen) : group
   return { key: `${band.key}-${own.key}-${shell}`, label: `${own.text}, ${band.text}, ${SHELL_TEXT[shell]}`, parent, shell }
 }
 

@@ -3,6 +3,7 @@
  */
 import { getElement, getIsotope } from './elements'
 import { slaterTotalEnergyRydberg, nStar, screeningConstant } from './slater'
+import { DIRAC_METHOD_NAMES, HF_CORRELATED_BASIS, HF_DELTA_BASIS } from './scf/options'
 import type { Subshell } from './subshells'
 
 export type MethodName =
@@ -56,6 +57,11 @@ export interface MethodInfo {
   citation: string
   /** true when the estimate comes from the SCF solver in ./scf rather than this module */
   scf: boolean
+  /**
+   * what the record names as the number's basis, for an SCF method that keeps only its energy and
+   * no solution of its own; without it the basis is the name of the solution the number comes from
+   */
+  basis?: string
   domain: MethodDomain
 }
 
@@ -149,6 +155,7 @@ export const METHODS: readonly MethodInfo[] = [
     citation:
       'D. A. Liberman, D. T. Cromer and J. T. Waber, Comput. Phys. Commun. 2, 107 (1971); W. Kohn and L. J. Sham, Phys. Rev. 140, A1133 (1965); S. H. Vosko, L. Wilk and M. Nusair, Can. J. Phys. 58, 1200 (1980)',
     scf: true,
+    basis: DIRAC_METHOD_NAMES.lsd,
     domain: { text: 'atoms and positive ions, Z = 1–118, every charge state; relativistic, finite nucleus, no self-interaction correction, no QED', oneElectron: 'any', anions: false, zMax: 118 },
   },
   {
@@ -167,6 +174,7 @@ export const METHODS: readonly MethodInfo[] = [
     citation:
       'E. U. Condon and G. H. Shortley, The Theory of Atomic Spectra (Cambridge, 1935); J. C. Slater, Phys. Rev. 34, 1293 (1929); orbitals and relativistic shift: D. A. Liberman, D. T. Cromer and J. T. Waber, Comput. Phys. Commun. 2, 107 (1971)',
     scf: true,
+    basis: HF_DELTA_BASIS,
     domain: {
       text: 'ions of charge ≥ 5 with two or more electrons, Z = 7–118; no correlation energy, relativity as a local-density shift',
       oneElectron: 'never',
@@ -186,6 +194,7 @@ export const METHODS: readonly MethodInfo[] = [
     citation:
       'E. U. Condon and G. H. Shortley, The Theory of Atomic Spectra (Cambridge, 1935); S. H. Vosko, L. Wilk and M. Nusair, Can. J. Phys. 58, 1200 (1980); H. Stoll, C. M. E. Pavlidou and H. Preuss, Theor. Chim. Acta 49, 143 (1978); relativistic shift: D. A. Liberman, D. T. Cromer and J. T. Waber, Comput. Phys. Commun. 2, 107 (1971)',
     scf: true,
+    basis: HF_CORRELATED_BASIS,
     domain: {
       text: 'atoms and positive ions with two or more electrons, Z = 2–118; local correlation, relativity as a local-density shift',
       oneElectron: 'never',

@@ -7,7 +7,6 @@
 import { type BestEstimate, bestEstimate } from './best-estimate'
 import { bindingEnergies, type BindingEnergy } from './binding'
 import type { DiracOrbital, DiracRadialDensity, ScfOrbital, ScfRadialDensity, ScfSpeciesEstimates } from './scf/types'
-import { DIRAC_METHOD_NAMES, HF_CORRELATED_BASIS, HF_DELTA_BASIS } from './scf/options'
 import type { ConfigurationRule } from './configuration'
 import { CODATA_2018, METHODS, METHOD_NAMES, type MethodName, diracHydrogenLikeEv, nuclearMass } from './methods'
 import { oneElectronEnergy, type QedCorrection } from './qed/index'
@@ -182,13 +181,8 @@ export function describeSpecies(input: string | ParsedSpecies, options: Describe
         : scf.byMethod?.[info.name]
       // a method the caller's SCF results do not cover is left out (not computed), not "not applicable"
       if (value === undefined) continue
-      // dirac-lsd-delta and the Hartree–Fock methods keep no solution of their own, only their energy: the basis names what it rests on
-      const basis =
-        info.name === 'dirac-lsd-delta' ? DIRAC_METHOD_NAMES.lsd
-        : info.name === 'hf-delta' ? HF_DELTA_BASIS
-        : info.name === 'hf-correlated-delta' ? HF_CORRELATED_BASIS
-        : relativistic && dirac ? dirac.species.method
-        : scf.species.method
+      // a method that keeps only its energy names its own basis (methods.ts)
+      const basis = info.basis ?? (relativistic && dirac ? dirac.species.method : scf.species.method)
       estimates.push(judged(info.name, species, value, referenceEv, { basis, missing, corrections: screened?.corrections }))
     }
     if (dirac) {

@@ -85,7 +85,7 @@ export function solveSpeciesAll(z: number, charge: number, options: ScfSpeciesOp
     dirac: solveSpeciesDirac(z, charge, options),
     byMethod: {
       'dirac-lsd-delta': lsd.deltaEv,
-      'hf-delta': exchangeOnly ? hf!.eV : null,
+      'hf-delta': exchangeOnly && hf ? hf.eV : null,
       'hf-correlated-delta': correlated ? withCorrelation : null,
     },
   }

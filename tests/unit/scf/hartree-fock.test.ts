@@ -7,10 +7,8 @@ import { lsdOnGrid } from '../../../shared/physics/scf/xc'
 import { solveSpeciesDirac, solveSpeciesAll } from '../../../shared/physics/scf/index'
 import { makeLogGrid } from '../../../shared/physics/scf/grid'
 import { runScf } from '../../../shared/physics/scf/scf'
-import type { SubshellOccupation } from '../../../shared/physics/scf/channels'
+import { parseConfiguration } from '../../../shared/physics/subshells'
 
-const subshells = (text: string): SubshellOccupation[] =>
-  text.split(' ').map((t) => ({ n: Number(t[0]), l: 'spdf'.indexOf(t[1]), electrons: Number(t.slice(2)) }))
 
 describe('angular factors', () => {
   it('3j symbols: (j j 0; m −m 0) = (−1)^(j−m)/√(2j+1) (closed form, A. R. Edmonds, Angular Momentum in Quantum Mechanics, 1957, eq. 3.7.8; from memory)', () => {
@@ -76,7 +74,7 @@ describe('the Hartree–Fock energy of local-density orbitals', () => {
       [6, '1s2 2s2 2p2', -3 / 25, 0, 1],
       [22, '1s2 2s2 2p6 3s2 3p6 3d2', -58 / 441, 5 / 441, 2],
     ] as const) {
-      const run = runScf(z, subshells(text), { functional: 'lda' })
+      const run = runScf(z, parseConfiguration(text), { functional: 'lda' })
       const orbitals = restrictedOrbitals(run)
       if (typeof orbitals === 'string') throw new Error(orbitals)
       const open = orbitals.find((o) => o.l === l)!.p
@@ -100,7 +98,7 @@ describe('the Hartree–Fock energy of local-density orbitals', () => {
     ['Ar', 18, '1s2 2s2 2p6 3s2 3p6', -526.81751],
     ['Kr', 36, '1s2 2s2 2p6 3s2 3p6 3d10 4s2 4p6', -2752.05498],
   ] as const)('%s: above the Hartree–Fock limit, within 1e-3 of it', (_, z, text, limit) => {
-    const run = runScf(z, subshells(text), { functional: 'lda' })
+    const run = runScf(z, parseConfiguration(text), { functional: 'lda' })
     const orbitals = restrictedOrbitals(run)
     if (typeof orbitals === 'string') throw new Error(orbitals)
     const energy = determinantEnergy(run.grid, orbitals)
@@ -145,7 +143,7 @@ describe('hf-delta', () => {
 
 describe('hf-correlated-delta', () => {
   it('the local correlation energy: He with its LDA orbitals −0.112 hartree (from memory: the usual figure for LDA correlation of He, against −0.042 exact), and exchange + correlation adds up to the functional', () => {
-    const run = runScf(2, subshells('1s2'), { functional: 'lda' })
+    const run = runScf(2, parseConfiguration('1s2'), { functional: 'lda' })
     const orbitals = restrictedOrbitals(run)
     if (typeof orbitals === 'string') throw new Error(orbitals)
     const ec = correlationEnergy(run.grid, orbitals)
